@@ -1,0 +1,46 @@
+using System.CommandLine;
+using GlobalFit.Cli.Commands;
+using GlobalFit.Physics.Input;
+
+namespace GlobalFit.Cli;
+
+/// <summary>The <c>globalfit</c> command tree and its error policy: bad input exits with
+/// <see cref="ExitCodes.BadInput"/> and a message naming the file and place; bugs exit with
+/// <see cref="ExitCodes.InternalError"/>.</summary>
+public static class CommandLineApp
+{
+    /// <summary>Parses <paramref name="args"/>, runs the chosen command and returns the exit code.</summary>
+    public static int Run(string[] args, CliContext context)
+    {
+        var root = new RootCommand(
+            "globalfit: joint fitting of overlapping gravitational-wave sources in space-interferometer TDI data.")
+        {
+            SimulateCommand.Create(context),
+            InspectCommand.Create(context),
+            SensitivityCommand.Create(context),
+            DemoCommand.Create(context),
+            BenchCommand.Create(context),
+        };
+        ParseResult parse = root.Parse(args);
+        if (parse.Errors.Count > 0)
+        {
+            foreach (var error in parse.Errors) context.Error.WriteLine($"error: {error.Message}");
+            context.Error.WriteLine("Run 'globalfit --help' (or 'globalfit COMMAND --help') for usage.");
+            return ExitCodes.BadInput;
+        }
+        try
+        {
+            return parse.Invoke(new InvocationConfiguration { Output = context.Out, Error = context.Error, EnableDefaultExceptionHandler = false });
+        }
+        catch (InvalidInputException e)
+        {
+            context.Error.WriteLine($"error: {e.Message}");
+            return ExitCodes.BadInput;
+        }
+        catch (OperationCanceledException)
+        {
+            context.Error.WriteLine("interrupted");
+            return ExitCodes.Interrupted;
+        }
+    }
+}

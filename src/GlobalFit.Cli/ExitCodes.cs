@@ -1,0 +1,17 @@
+namespace GlobalFit.Cli;
+
+/// <summary>Process exit codes of the <c>globalfit</c> command.</summary>
+public static class ExitCodes
+{
+    /// <summary>The command did what was asked.</summary>
+    public const int Success = 0;
+
+    /// <summary>An unexpected internal error (a bug): the message and stack trace go to standard error.</summary>
+    public const int InternalError = 1;
+
+    /// <summary>Bad input: an unreadable or invalid file, option or value. Nothing was written.</summary>
+    public const int BadInput = 2;
+
+    /// <summary>Interrupted by the user (Ctrl-C).</summary>
+    public const int Interrupted = 130;
+}

@@ -1,0 +1,3 @@
+using GlobalFit.Cli;
+
+return CommandLineApp.Run(args, CliContext.FromConsole());

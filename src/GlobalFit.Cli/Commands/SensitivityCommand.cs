@@ -1,0 +1,94 @@
+using System.CommandLine;
+using System.Globalization;
+using System.Text;
+using System.Text.Json;
+using GlobalFit.Cli.Console;
+using GlobalFit.Cli.Plotting;
+using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Noise;
+
+namespace GlobalFit.Cli.Commands;
+
+/// <summary><c>globalfit sensitivity</c>: the noise PSDs of A, E, T and the sky-averaged sensitivity curve,
+/// as CSV and optionally as a PNG chart.</summary>
+public static class SensitivityCommand
+{
+    /// <summary>Builds the command.</summary>
+    public static Command Create(CliContext context)
+    {
+        var years = new Option<double?>("--years") { Description = "Observation time in years for the confusion foreground fit (0.5, 1, 2 or 4); omit for instrument noise only" };
+        var output = new Option<string>("--out") { Description = "CSV file to write", Required = true };
+        var png = new Option<string?>("--png") { Description = "Also draw the curve into this PNG file" };
+        var fMin = new Option<double>("--f-min") { Description = "Lowest frequency, Hz", DefaultValueFactory = _ => 1e-5 };
+        var fMax = new Option<double>("--f-max") { Description = "Highest frequency, Hz", DefaultValueFactory = _ => 1.0 };
+        var points = new Option<int>("--points") { Description = "Number of log-spaced frequencies", DefaultValueFactory = _ => 400 };
+        var force = new Option<bool>("--force") { Description = "Replace existing output files" };
+        var json = new Option<bool>("--json") { Description = "Print a JSON summary instead of text" };
+        var command = new Command("sensitivity", "Write the A/E/T noise PSDs and the sky-averaged sensitivity curve (the plot analysts draw first)")
+        {
+            years, output, png, fMin, fMax, points, force, json,
+        };
+        command.SetAction(parse => Run(context, new Request(
+            parse.GetValue(years), parse.GetValue(output)!, parse.GetValue(png), parse.GetValue(fMin),
+            parse.GetValue(fMax), parse.GetValue(points), parse.GetValue(force), parse.GetValue(json))));
+        return command;
+    }
+
+    private sealed record Request(double? Years, string Output, string? Png, double FMin, double FMax, int Points, bool Force, bool Json);
+
+    private static int Run(CliContext context, Request r)
+    {
+        if (!(r.FMin > 0) || !(r.FMax > r.FMin) || !double.IsFinite(r.FMax))
+            throw new InvalidInputException("--f-min/--f-max", null, $"need 0 < f-min < f-max, got {r.FMin} and {r.FMax}");
+        if (r.Points < 2 || r.Points > 1_000_000)
+            throw new InvalidInputException("--points", null, $"must be between 2 and 1000000, got {r.Points}");
+        GalacticConfusionSettings? foreground = null;
+        if (r.Years is double y)
+        {
+            if (!GalacticConfusionSettings.SupportedObservationYears.Contains(y))
+                throw new InvalidInputException("--years", null, $"the published foreground fit exists for 0.5, 1, 2 and 4 years only, got {y}");
+            foreground = new GalacticConfusionSettings(y);
+        }
+        string csvPath = OutputPaths.CheckWritable(r.Output, r.Force, "--out");
+        string? pngPath = r.Png is null ? null : OutputPaths.CheckWritable(r.Png, r.Force, "--png");
+
+        var noise = new AetNoiseModel(InstrumentNoiseSettings.Default, foreground);
+        var curve = new SensitivityCurve(InstrumentNoiseSettings.Default, foreground);
+        var table = SensitivityTable.Compute(noise, curve, r.FMin, r.FMax, r.Points);
+
+        AtomicFile.Write(csvPath, overwrite: true, stream => stream.Write(Encoding.UTF8.GetBytes(table.ToCsv())));
+        if (pngPath is not null)
+        {
+            var chart = new LogLogChart("Sky-averaged sensitivity", "frequency [Hz]", "strain amplitude spectral density [1/√Hz]");
+            chart.AddCurve("instrument + foreground (exact sky average)", table.FrequencyHz, table.ExactStrainPsd.Select(Math.Sqrt).ToArray());
+            chart.AddCurve("approximate transfer function (Robson et al. 2019)", table.FrequencyHz, table.RobsonStrainPsd.Select(Math.Sqrt).ToArray());
+            if (foreground is not null)
+                chart.AddCurve("confusion foreground", table.FrequencyHz, table.ForegroundStrainPsd.Select(Math.Sqrt).ToArray());
+            byte[] bytes = chart.ToPng();
+            AtomicFile.Write(pngPath, overwrite: true, stream => stream.Write(bytes));
+        }
+
+        var (fBest, sBest) = table.Minimum();
+        if (r.Json)
+        {
+            context.Out.WriteLine(JsonSerializer.Serialize(new Dictionary<string, object?>
+            {
+                ["csv"] = csvPath,
+                ["png"] = pngPath,
+                ["foreground_years"] = r.Years,
+                ["points"] = r.Points,
+                ["most_sensitive_frequency_hz"] = fBest,
+                ["most_sensitive_strain_asd"] = Math.Sqrt(sBest),
+            }));
+        }
+        else
+        {
+            context.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"wrote {r.Points} frequencies from {r.FMin:G3} to {r.FMax:G3} Hz to {csvPath}"));
+            if (pngPath is not null) context.Out.WriteLine($"wrote chart to {pngPath}");
+            context.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"most sensitive at {fBest * 1e3:F2} mHz: sqrt(S_n) = {Math.Sqrt(sBest):E3} /sqrt(Hz)"));
+        }
+        return ExitCodes.Success;
+    }
+}

@@ -10,7 +10,7 @@
 import cmath, math
 L=1.0  # units with c=1, L=1 -> x = 2 pi f
 s3=math.sqrt(3)
-# equilateral triangle in xy plane rotated arbitrarily
+# static equilateral triangle in the xy plane (sky averages do not depend on its orientation)
 P=[(0,0,0),(1,0,0),(0.5,s3/2,0)]
 def sub(a,b): return tuple(a[i]-b[i] for i in range(3))
 def dot(a,b): return sum(a[i]*b[i] for i in range(3))

@@ -1,4 +1,3 @@
-using GlobalFit.Physics.Constants;
 using GlobalFit.Physics.Detector;
 using GlobalFit.Physics.Series;
 using Xunit;
@@ -16,7 +15,7 @@ namespace GlobalFit.Physics.Tests.Detector;
 public sealed class SkyAveragedResponseTests
 {
     private const double ArmM = 2.5e9;
-    private static readonly double TransferFrequencyHz = PhysicalConstants.SpeedOfLightMS / (2.0 * Math.PI * ArmM);
+    private static readonly double TransferFrequencyHz = TransferFrequency.Hz(ArmM);
 
     // Source: sheet §C.4 table of exact static equal-arm R_X = <|X|^2>/(16 x^2 sin^2 x) and check-values.csv rows
     // "R_X exact static equal-arm" (CMP, converged to ~1e-5, printed to 5 decimals). Tolerance 6e-6 absolute: table

@@ -9,7 +9,7 @@ public sealed class SlowReferenceResponseTests(ITestOutputHelper output)
 {
     private const double ArmM = 2.5e9;
     private const double C = PhysicalConstants.SpeedOfLightMS;
-    private static readonly double TransferFrequencyHz = C / (2.0 * Math.PI * ArmM);
+    private static readonly double TransferFrequencyHz = TransferFrequency.Hz(ArmM);
     private static readonly RigidOrbits Rigid = new(armLengthM: ArmM, initialOrbitalPhaseRad: 0.3, initialOrientationRad: 0.7);
 
     private static MonochromaticBinaryStrain Binary(double frequencyHz) =>

@@ -83,7 +83,7 @@ public sealed class RigidOrbits : IConstellationOrbits
         SpacecraftLabel.Check(spacecraft, nameof(spacecraft));
         int n = spacecraft - 1;
         double alpha = _angularFrequency * timeSeconds + InitialOrbitalPhaseRad;
-        double cosAlpha = Math.Cos(alpha), sinAlpha = Math.Sin(alpha);
+        var (sinAlpha, cosAlpha) = Math.SinCos(alpha);
         double cosBeta = _cosBeta[n], sinBeta = _sinBeta[n];
         // cos(2α − β), sin(2α − β) and cos(α − β) by angle addition, to avoid three more trig calls.
         double cos2Alpha = cosAlpha * cosAlpha - sinAlpha * sinAlpha;

@@ -11,8 +11,9 @@ namespace GlobalFit.Physics.Noise;
 /// signal and passes through the same TDI combination as any wave.</para>
 /// <para>For A and E, <c>R_ch</c> is <see cref="SkyAveragedResponse.ChannelAE"/> or Robson's approximation
 /// (<see cref="ConfusionResponse"/>). For T the exact <see cref="SkyAveragedResponse.ChannelT"/> is always used
-/// (Robson's formula has no T counterpart); it makes the T foreground negligible at low frequency
-/// (R_T/R_A ≈ 1e-4 at 2 mHz) and, since the fit switches off above its knee, everywhere in practice.
+/// (Robson's formula has no T counterpart). R_T/R_A grows as x⁶ (1e-5 at x = 0.5, 7e-4 at x = 1), so the T
+/// foreground is below 1e-8 of A's wherever the fit is on below 5 mHz, and zero above the fit's knee: in
+/// practice T carries instrument noise only.
 /// This treats the foreground as isotropic, as Robson's sky-averaged S_c does; the real foreground is
 /// anisotropic and cyclo-stationary, which this stationary model does not describe.</para>
 /// <para>Immutable and thread-safe; the span fillers allocate nothing.</para>

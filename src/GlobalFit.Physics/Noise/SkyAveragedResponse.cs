@@ -11,7 +11,8 @@ namespace GlobalFit.Physics.Noise;
 /// <para>Values are computed here by quadrature (<see cref="SkyAverageQuadrature"/>), tabulated once on
 /// <c>0 ≤ x ≤ 20</c> (f ≤ 0.38 Hz for 2.5 Gm arms) at spacing 0.05 and interpolated by four-point cubic
 /// Lagrange interpolation (interpolation error below 1e-7, see the tests); above the table every call
-/// integrates directly. Building the table takes a few tenths of a second on first use. Thread-safe.</para>
+/// integrates directly (about a millisecond each). Table entries are computed on first use, a few milliseconds
+/// each, so only the part of the band a process touches is ever integrated. Thread-safe.</para>
 /// </remarks>
 public static class SkyAveragedResponse
 {
@@ -21,7 +22,14 @@ public static class SkyAveragedResponse
     /// <summary>Upper end of the tabulated range of x; calls above it integrate directly (slowly).</summary>
     public const double TabulatedMaximumX = TableStep * TableIntervals;
 
-    private static readonly Lazy<Table> Tabulated = new(BuildTable, LazyThreadSafetyMode.ExecutionAndPublication);
+    // Entries are computed on first use, one grid point at a time, so a caller that only needs the
+    // millihertz band pays for a few dozen quadratures rather than the whole table. Each entry is a pure
+    // function of its index, so two threads racing on one entry store identical values; the ready flag is
+    // published after the values (Volatile) so a reader never sees a half-written entry.
+    private static readonly double[] TableX = new double[TableIntervals + 1];
+    private static readonly double[] TableAE = new double[TableIntervals + 1];
+    private static readonly double[] TableT = new double[TableIntervals + 1];
+    private static readonly bool[] TableReady = new bool[TableIntervals + 1];
 
     /// <summary>R_X of one Michelson channel.</summary>
     /// <param name="x">Dimensionless frequency f/f*, non-negative.</param>
@@ -54,17 +62,17 @@ public static class SkyAveragedResponse
             var direct = SkyAverageQuadrature.Average(x);
             return curve switch { Curve.X => direct.X, Curve.AE => direct.A, _ => direct.T };
         }
-        var table = Tabulated.Value;
-        double[] values = curve switch { Curve.X => table.X, Curve.AE => table.AE, _ => table.T };
-        return Interpolate(values, x);
-    }
-
-    // Four-point Lagrange on the uniform grid, using the stencil [i−1, i+2] clamped to the table.
-    private static double Interpolate(double[] values, double x)
-    {
         int i = Math.Min((int)(x / TableStep), TableIntervals - 1);
         int start = Math.Clamp(i - 1, 0, TableIntervals - 3);
-        double s = x / TableStep - start;
+        for (int j = start; j < start + 4; j++) EnsureEntry(j);
+        double[] values = curve switch { Curve.X => TableX, Curve.AE => TableAE, _ => TableT };
+        // Every R is non-negative; the cubic can undershoot by ~1e-11 where R_T rises as x⁸ from zero.
+        return Math.Max(0.0, Interpolate(values, start, x / TableStep - start));
+    }
+
+    // Four-point Lagrange on the uniform grid over the stencil [start, start + 3]; s is x in steps from start.
+    private static double Interpolate(double[] values, int start, double s)
+    {
         double y0 = values[start], y1 = values[start + 1], y2 = values[start + 2], y3 = values[start + 3];
         return -y0 * (s - 1) * (s - 2) * (s - 3) / 6.0
             + y1 * s * (s - 2) * (s - 3) / 2.0
@@ -72,23 +80,16 @@ public static class SkyAveragedResponse
             + y3 * s * (s - 1) * (s - 2) / 6.0;
     }
 
-    private static Table BuildTable()
+    private static void EnsureEntry(int index)
     {
-        var x = new double[TableIntervals + 1];
-        var ae = new double[TableIntervals + 1];
-        var t = new double[TableIntervals + 1];
-        for (int i = 0; i <= TableIntervals; i++)
-        {
-            var averages = SkyAverageQuadrature.Average(i * TableStep);
-            x[i] = averages.X;
-            // A and E are equal by symmetry; averaging the two halves the quadrature error of each.
-            ae[i] = 0.5 * (averages.A + averages.E);
-            t[i] = averages.T;
-        }
-        return new Table(x, ae, t);
+        if (Volatile.Read(ref TableReady[index])) return;
+        var averages = SkyAverageQuadrature.Average(index * TableStep);
+        TableX[index] = averages.X;
+        // A and E are equal by symmetry; averaging the two halves the quadrature error of each.
+        TableAE[index] = 0.5 * (averages.A + averages.E);
+        TableT[index] = averages.T;
+        Volatile.Write(ref TableReady[index], true);
     }
-
-    private sealed record Table(double[] X, double[] AE, double[] T);
 
     private enum Curve { X, AE, T }
 }

@@ -92,6 +92,18 @@ public class SkyAveragedResponseTests
     {
         Assert.Equal(0.0, SkyAveragedResponse.ChannelT(0.0), 1e-14);
         Assert.True(SkyAveragedResponse.ChannelT(0.05) < 1e-2 * SkyAveragedResponse.ChannelAE(0.05));
+        // R_T/R_A grows as x⁶ at low x (measured: 1.3e-5 at x = 0.5, 6.6e-4 at x = 1): doubling x multiplies it by ≈ 64.
+        double ratioHalf = SkyAveragedResponse.ChannelT(0.5) / SkyAveragedResponse.ChannelAE(0.5);
+        double ratioQuarter = SkyAverageQuadrature.Average(0.25).T / SkyAverageQuadrature.Average(0.25).A;
+        Assert.InRange(ratioHalf / ratioQuarter, 55, 70);
+    }
+
+    // Interpolating R_T, which rises from zero like x⁸, must not produce negative responses.
+    [Fact]
+    public void Interpolated_responses_are_never_negative()
+    {
+        for (double x = 0; x < 1; x += 0.0037)
+            Assert.True(SkyAveragedResponse.ChannelT(x) >= 0, $"R_T({x}) < 0");
     }
 
     // Convergence: doubling the nodes changes the averages by less than 1e-10 up to the table's end,

@@ -37,6 +37,7 @@ internal sealed class ObservationFileReader : IDisposable
             throw input.Error(null, "is a folder, not an observation file");
         if (!File.Exists(path))
             throw input.Error(null, "file not found");
+        CheckSignatureAndLength(path, input);
         NativeFile file;
         try
         {
@@ -56,6 +57,26 @@ internal sealed class ObservationFileReader : IDisposable
     }
 
     public void Dispose() => _file.Dispose();
+
+    private static void CheckSignatureAndLength(string path, H5Input input)
+    {
+        Hdf5Superblock.Facts facts;
+        long length;
+        try
+        {
+            using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read);
+            length = stream.Length;
+            facts = Hdf5Superblock.Inspect(stream);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw input.Error(null, $"cannot be opened ({e.Message})", e);
+        }
+        if (!facts.HasSignature)
+            throw input.Error(null, length == 0 ? "is empty, not an HDF5 file" : "is not an HDF5 file (no HDF5 signature at its start)");
+        if (facts.RecordedLengthBytes > length)
+            throw input.Error(null, $"is truncated: it has {length} bytes but its HDF5 superblock records {facts.RecordedLengthBytes}");
+    }
 
     /// <summary>Reads the root <c>format_version</c> and rejects files that are not observation files or are too new.</summary>
     public int ReadFormatVersion()

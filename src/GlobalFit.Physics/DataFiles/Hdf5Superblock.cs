@@ -12,8 +12,8 @@ namespace GlobalFit.Physics.DataFiles;
 /// and Superblock": the signature sits at byte 0, 512, 1024, 2048, … (after an optional user block); versions 0 and 1
 /// store the sizes of offsets and lengths at bytes 13–14 and the base and end-of-file addresses after 16 (version 0) or
 /// 20 (version 1) further bytes; versions 2 and 3 store the sizes at bytes 9–10 and base, extension and end-of-file
-/// addresses from byte 12. Addresses are relative to the base address, which the C library takes to be the signature's
-/// offset; all-ones means "undefined".</para>
+/// addresses from byte 12. The end-of-file address is absolute (the spec: "the absolute file address of the first byte
+/// past the end of all HDF5 data"); all-ones means "undefined".</para>
 /// </remarks>
 internal static class Hdf5Superblock
 {
@@ -21,7 +21,7 @@ internal static class Hdf5Superblock
 
     /// <summary>What the start of a file says about it.</summary>
     /// <param name="HasSignature">The HDF5 signature was found at one of the allowed offsets.</param>
-    /// <param name="RecordedLengthBytes">Length the file must have at least (base + end-of-file address), or null
+    /// <param name="RecordedLengthBytes">Length the file must have at least (its end-of-file address), or null
     /// when the superblock version is unknown to this check or the address is undefined.</param>
     public readonly record struct Facts(bool HasSignature, long? RecordedLengthBytes);
 
@@ -35,12 +35,12 @@ internal static class Hdf5Superblock
             int read = stream.ReadAtLeast(header, header.Length, throwOnEndOfStream: false);
             if (read < Signature.Length || !header[..Signature.Length].SequenceEqual(Signature))
                 continue;
-            return new Facts(true, RecordedLength(header[..read], offset));
+            return new Facts(true, RecordedLength(header[..read]));
         }
         return new Facts(false, null);
     }
 
-    private static long? RecordedLength(ReadOnlySpan<byte> header, long signatureOffset)
+    private static long? RecordedLength(ReadOnlySpan<byte> header)
     {
         if (header.Length < 9) return null;
         int version = header[8];
@@ -62,11 +62,10 @@ internal static class Hdf5Superblock
         }
         if (offsetSize is not (2 or 4 or 8) || endAt + offsetSize > header.Length)
             return null;
+        // Unlike other addresses, the end-of-file address is absolute: with a 512-byte user block, h5py 3.7
+        // (HDF5 1.10) stored base 512 and an end-of-file address equal to the whole file length.
         ulong? endAddress = Address(header.Slice(endAt, offsetSize));
-        // Addresses count from the base, which the C library takes to be where the signature was found.
-        if (endAddress is null || endAddress.Value > (ulong)(long.MaxValue - signatureOffset))
-            return null;
-        return signatureOffset + (long)endAddress.Value;
+        return endAddress is null || endAddress.Value > long.MaxValue ? null : (long)endAddress.Value;
     }
 
     private static ulong? Address(ReadOnlySpan<byte> bytes)

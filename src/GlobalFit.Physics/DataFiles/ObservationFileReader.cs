@@ -155,10 +155,10 @@ internal sealed class ObservationFileReader : IDisposable
             var samples = _input.ReadDoubles(datasets[i], path);
             if (samples.Length != count)
                 throw _input.Error(path, $"returned {samples.Length} samples where its shape says {count}");
-            int bad = new TimeSeries(t0, dt, samples).IndexOfFirstNonFinite();
+            series[i] = new TimeSeries(t0, dt, samples);
+            int bad = series[i].IndexOfFirstNonFinite();
             if (bad >= 0)
                 throw _input.Error($"{path} sample {bad}", $"is {samples[bad]}; samples must be finite (first bad sample of channel {names[i]})");
-            series[i] = new TimeSeries(t0, dt, samples);
         }
         var data = channels == L.AetChannels
             ? new AetTimeSeries(series[0], series[1], series[2])

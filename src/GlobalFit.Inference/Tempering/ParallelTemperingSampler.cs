@@ -1,0 +1,387 @@
+using System.Collections.Immutable;
+using GlobalFit.Inference.Diagnostics;
+using GlobalFit.Inference.Parameters;
+using GlobalFit.Inference.Proposals;
+using GlobalFit.Inference.Random;
+using GlobalFit.Inference.State;
+using GlobalFit.Inference.Targets;
+
+namespace GlobalFit.Inference.Tempering;
+
+/// <summary>
+/// Parallel-tempering Metropolis–Hastings for a fixed-dimension model: each chain targets p(θ) L(θ)^β for
+/// its rung's β, neighbouring rungs swap states, and the cold rung (β = 1) gives the posterior samples.
+/// </summary>
+/// <remarks>
+/// <para>Swaps: Swendsen &amp; Wang (1986), Phys. Rev. Lett. 57, 2607; Geyer (1991); Earl &amp; Deem (2005),
+/// Phys. Chem. Chem. Phys. 7, 3910. A swap between rungs i and i+1 (same replica) is accepted with
+/// probability min(1, exp[(β_i − β_{i+1})(ln L_{i+1} − ln L_i)]); pairs are attempted from the hottest
+/// down, every <see cref="TemperingSettings.SwapInterval"/> steps. Ladder adaptation: see
+/// <see cref="TemperatureLadder"/>. Proposal instances (and their adaptation) stay with their rung; only
+/// states move.</para>
+/// <para>Each chain has its own random stream derived from (Seed, StreamId, chain index), the swaps another
+/// from (Seed, StreamId, 2⁶⁴ − 1), so results do not depend on how chains are scheduled.</para>
+/// <para>Steady-state steps allocate nothing. Not thread-safe: call from one thread at a time.</para>
+/// </remarks>
+/// <typeparam name="TModel">The model; a struct or sealed class gets a devirtualised loop.</typeparam>
+public sealed class ParallelTemperingSampler<TModel>
+    where TModel : ITargetModel
+{
+    private const int MaximumInitialDraws = 10_000;
+    private const ulong SwapStreamId = ulong.MaxValue;
+
+    private readonly TModel _model;
+    private readonly ParameterSchema _schema;
+    private readonly ParallelTemperingSettings _settings;
+    private readonly int _dimension;
+    private readonly int _replicas;
+    private readonly int _chainCount;
+    private readonly TemperatureLadder _ladder;
+    private readonly ProposalMixture[] _mixtures;
+    private readonly ChainTemperature[] _temperatures;
+    private readonly double[] _positions;
+    private readonly double[] _logLikelihoods;
+    private readonly double[] _logPriors;
+    private readonly RandomStream[] _random;
+    private readonly double[] _candidate;
+    private readonly double[] _swapBuffer;
+    private readonly int[] _acceptedPerPair;
+    private readonly EvidenceAccumulator _evidence;
+    private RandomStream _swapRandom;
+
+    /// <summary>Creates a sampler with every chain started from a prior draw with finite likelihood.</summary>
+    /// <param name="model">The model.</param>
+    /// <param name="settings">The settings; validated here.</param>
+    /// <exception cref="ArgumentException">Invalid settings (the parameter name is the offending field).</exception>
+    /// <exception cref="InvalidOperationException">No prior draw with finite prior and likelihood was found.</exception>
+    public ParallelTemperingSampler(TModel model, ParallelTemperingSettings settings)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(settings);
+        settings.Validate();
+        _model = model;
+        _schema = model.Schema ?? throw new ArgumentException("Model schema must not be null.", nameof(model));
+        _settings = settings;
+        _dimension = _schema.Dimension;
+        _replicas = settings.Tempering.ChainsPerTemperature;
+        _chainCount = checked(settings.Tempering.TemperatureCount * _replicas);
+        _ladder = new TemperatureLadder(settings.Tempering);
+        _positions = new double[checked(_chainCount * _dimension)];
+        _logLikelihoods = new double[_chainCount];
+        _logPriors = new double[_chainCount];
+        _random = new RandomStream[_chainCount];
+        _candidate = new double[_dimension];
+        _swapBuffer = new double[_dimension];
+        _acceptedPerPair = new int[Math.Max(_ladder.Count - 1, 0)];
+        _evidence = new EvidenceAccumulator(_ladder.Count);
+        _temperatures = new ChainTemperature[_chainCount];
+        _mixtures = new ProposalMixture[_chainCount];
+        _swapRandom = RandomStream.ForPath(settings.Seed, settings.StreamId, SwapStreamId);
+        for (int c = 0; c < _chainCount; c++)
+        {
+            int rung = c / _replicas;
+            _random[c] = RandomStream.ForPath(settings.Seed, settings.StreamId, (ulong)c);
+            _temperatures[c] = new ChainTemperature(rung, _ladder.InverseTemperatures[rung]);
+            var context = new ProposalContext(_schema, model, _temperatures[c], default);
+            _mixtures[c] = new ProposalMixture(settings.Proposals, context, settings.Seed, settings.StreamId, (ulong)c);
+            InitialiseFromPrior(c);
+        }
+    }
+
+    /// <summary>Recreates a sampler from a saved state; the continuation is bit-identical to the original run.</summary>
+    /// <param name="model">The same model as the original run.</param>
+    /// <param name="settings">The same settings as the original run.</param>
+    /// <param name="state">The saved state.</param>
+    /// <returns>The resumed sampler.</returns>
+    /// <exception cref="ArgumentException">The state does not fit the model or settings.</exception>
+    public static ParallelTemperingSampler<TModel> Resume(TModel model, ParallelTemperingSettings settings, ParallelTemperingState state)
+    {
+        ArgumentNullException.ThrowIfNull(state);
+        var sampler = new ParallelTemperingSampler<TModel>(model, settings);
+        sampler.RestoreState(state);
+        return sampler;
+    }
+
+    /// <summary>Parameter dimension d.</summary>
+    public int Dimension => _dimension;
+
+    /// <summary>Total number of chains (rungs × replicas).</summary>
+    public int ChainCount => _chainCount;
+
+    /// <summary>Number of cold replicas (= chains per temperature); chains 0 .. ColdChainCount − 1 are cold.</summary>
+    public int ColdChainCount => _replicas;
+
+    /// <summary>Steps taken so far.</summary>
+    public long Step { get; private set; }
+
+    /// <summary>Current β per rung.</summary>
+    public ReadOnlySpan<double> InverseTemperatures => _ladder.InverseTemperatures;
+
+    /// <summary>Position of chain <paramref name="chain"/> (cold chains are 0 .. ColdChainCount − 1).</summary>
+    /// <param name="chain">Chain index.</param>
+    /// <returns>A view that stays valid until the next step.</returns>
+    public ReadOnlySpan<double> Position(int chain) => _positions.AsSpan(checked(chain * _dimension), _dimension);
+
+    /// <summary>ln L of chain <paramref name="chain"/>.</summary>
+    /// <param name="chain">Chain index.</param>
+    /// <returns>The log likelihood.</returns>
+    public double LogLikelihood(int chain) => _logLikelihoods[chain];
+
+    /// <summary>ln p of chain <paramref name="chain"/>.</summary>
+    /// <param name="chain">Chain index.</param>
+    /// <returns>The log prior.</returns>
+    public double LogPrior(int chain) => _logPriors[chain];
+
+    /// <summary>The random stream of chain <paramref name="chain"/> (for determinism checks).</summary>
+    /// <param name="chain">Chain index.</param>
+    /// <returns>A copy of the stream state.</returns>
+    public RandomStream ChainRandom(int chain) => _random[chain];
+
+    /// <summary>Moves chain <paramref name="chain"/> to <paramref name="position"/> (e.g. a warm start).</summary>
+    /// <param name="chain">Chain index.</param>
+    /// <param name="position">A point with finite prior and likelihood.</param>
+    /// <exception cref="ArgumentException">The point is outside the support.</exception>
+    public void SetPosition(int chain, ReadOnlySpan<double> position)
+    {
+        if (position.Length != _dimension)
+        {
+            throw new ArgumentException("Position has the wrong length.", nameof(position));
+        }
+
+        double logPrior = _model.LogPrior(position);
+        double logLikelihood = double.IsFinite(logPrior) ? _model.LogLikelihood(position) : double.NegativeInfinity;
+        if (!double.IsFinite(logPrior) || !double.IsFinite(logLikelihood))
+        {
+            throw new ArgumentException("Position is outside the support of the model.", nameof(position));
+        }
+
+        position.CopyTo(_positions.AsSpan(chain * _dimension, _dimension));
+        _logPriors[chain] = logPrior;
+        _logLikelihoods[chain] = logLikelihood;
+    }
+
+    /// <summary>Runs <paramref name="steps"/> steps (each: one proposal per chain, then a swap round when due).</summary>
+    /// <param name="steps">Number of steps, ≥ 0.</param>
+    public void Advance(int steps) => Advance(steps, default(NoSampleSink));
+
+    /// <summary>Runs <paramref name="steps"/> steps and hands every cold-chain state to <paramref name="sink"/> after each.</summary>
+    /// <typeparam name="TSink">Sink type; generic so a struct sink is not boxed.</typeparam>
+    /// <param name="steps">Number of steps, ≥ 0.</param>
+    /// <param name="sink">The sample sink.</param>
+    public void Advance<TSink>(int steps, TSink sink)
+        where TSink : ISampleSink
+    {
+        ArgumentOutOfRangeException.ThrowIfNegative(steps);
+        for (int s = 0; s < steps; s++)
+        {
+            for (int c = 0; c < _chainCount; c++)
+            {
+                UpdateChain(c);
+            }
+
+            Step++;
+            if (_ladder.Count > 1 && Step % _settings.Tempering.SwapInterval == 0)
+            {
+                SwapRound();
+            }
+
+            for (int c = 0; c < _chainCount; c++)
+            {
+                _evidence.Add(c / _replicas, _logLikelihoods[c]);
+            }
+
+            for (int r = 0; r < _replicas; r++)
+            {
+                sink.OnSample(Step, r, Position(r), _logLikelihoods[r], _logPriors[r]);
+            }
+        }
+    }
+
+    /// <summary>Clears the ⟨ln L⟩ accumulators, e.g. after burn-in and after freezing the ladder.</summary>
+    public void ResetEvidenceAccumulators() => _evidence.Reset();
+
+    /// <summary>Thermodynamic-integration evidence from ⟨ln L⟩ per rung since the last reset.</summary>
+    /// <returns>The estimate (NaN if a rung has no terms).</returns>
+    public EvidenceEstimate EstimateEvidence() =>
+        ThermodynamicIntegration.LogEvidence(_ladder.InverseTemperatures, _evidence.Means());
+
+    /// <summary>A snapshot of acceptance, swap and ladder statistics (allocates; call between advances).</summary>
+    /// <returns>The statistics.</returns>
+    public SamplerStatistics GetStatistics()
+    {
+        var proposals = ImmutableArray.CreateBuilder<ProposalAcceptance>();
+        for (int rung = 0; rung < _ladder.Count; rung++)
+        {
+            for (int j = 0; j < _settings.Proposals.Length; j++)
+            {
+                long proposed = 0, accepted = 0;
+                for (int r = 0; r < _replicas; r++)
+                {
+                    proposed += _mixtures[rung * _replicas + r].Proposed[j];
+                    accepted += _mixtures[rung * _replicas + r].Accepted[j];
+                }
+
+                proposals.Add(new ProposalAcceptance(_settings.Proposals[j].Name, rung, proposed, accepted));
+            }
+        }
+
+        return new SamplerStatistics(
+            Step,
+            [.. _ladder.InverseTemperatures],
+            proposals.ToImmutable(),
+            _ladder.SwapAcceptanceRates(),
+            [.. _evidence.Means()]);
+    }
+
+    /// <summary>Copies the complete sampler state (allocates; call between advances).</summary>
+    /// <returns>The state.</returns>
+    public ParallelTemperingState CaptureState()
+    {
+        int proposalCount = _settings.Proposals.Length;
+        var proposalStates = new ProposalState?[_chainCount][];
+        long[] proposed = new long[_chainCount * proposalCount];
+        long[] accepted = new long[_chainCount * proposalCount];
+        for (int c = 0; c < _chainCount; c++)
+        {
+            proposalStates[c] = _mixtures[c].CaptureStates();
+            _mixtures[c].Proposed.CopyTo(proposed, c * proposalCount);
+            _mixtures[c].Accepted.CopyTo(accepted, c * proposalCount);
+        }
+
+        return new ParallelTemperingState(
+            Step, _dimension, _replicas, _ladder.InverseTemperatures.ToArray(), _ladder.Rounds,
+            (long[])_ladder.SwapsProposed.Clone(), (long[])_ladder.SwapsAccepted.Clone(),
+            (double[])_positions.Clone(), (double[])_logLikelihoods.Clone(), (double[])_logPriors.Clone(),
+            (RandomStream[])_random.Clone(), _swapRandom, proposalStates, proposed, accepted,
+            (double[])_evidence.Sums.Clone(), (long[])_evidence.Counts.Clone());
+    }
+
+    private void RestoreState(ParallelTemperingState state)
+    {
+        if (state.Dimension != _dimension || state.ChainsPerTemperature != _replicas
+            || state.Positions.Length != _positions.Length || state.ChainRandom.Length != _chainCount
+            || state.ProposalStates.Length != _chainCount
+            || state.ProposalsProposed.Length != _chainCount * _settings.Proposals.Length)
+        {
+            throw new ArgumentException("Saved state does not match the model and settings.", nameof(state));
+        }
+
+        Step = state.Step;
+        _ladder.Restore(state.InverseTemperatures, state.LadderRounds, state.SwapsProposed, state.SwapsAccepted);
+        state.Positions.CopyTo(_positions, 0);
+        state.LogLikelihoods.CopyTo(_logLikelihoods, 0);
+        state.LogPriors.CopyTo(_logPriors, 0);
+        state.ChainRandom.CopyTo(_random, 0);
+        _swapRandom = state.SwapRandom;
+        int proposalCount = _settings.Proposals.Length;
+        for (int c = 0; c < _chainCount; c++)
+        {
+            _mixtures[c].RestoreStates(
+                state.ProposalStates[c],
+                state.ProposalsProposed.AsSpan(c * proposalCount, proposalCount),
+                state.ProposalsAccepted.AsSpan(c * proposalCount, proposalCount));
+            _temperatures[c].InverseTemperature = _ladder.InverseTemperatures[c / _replicas];
+        }
+
+        _evidence.Restore(state.EvidenceSums, state.EvidenceCounts);
+    }
+
+    private void InitialiseFromPrior(int chain)
+    {
+        Span<double> position = _positions.AsSpan(chain * _dimension, _dimension);
+        for (int attempt = 0; attempt < MaximumInitialDraws; attempt++)
+        {
+            _model.DrawFromPrior(position, ref _random[chain]);
+            double logPrior = _model.LogPrior(position);
+            if (!double.IsFinite(logPrior))
+            {
+                continue;
+            }
+
+            double logLikelihood = _model.LogLikelihood(position);
+            if (double.IsFinite(logLikelihood))
+            {
+                _logPriors[chain] = logPrior;
+                _logLikelihoods[chain] = logLikelihood;
+                return;
+            }
+        }
+
+        throw new InvalidOperationException($"No prior draw with finite prior and likelihood in {MaximumInitialDraws} attempts.");
+    }
+
+    private void UpdateChain(int chain)
+    {
+        ref RandomStream random = ref _random[chain];
+        ProposalMixture mixture = _mixtures[chain];
+        Span<double> current = _positions.AsSpan(chain * _dimension, _dimension);
+        Span<double> candidate = _candidate;
+        int proposal = mixture.Choose(ref random);
+        double logProposalRatio = mixture.Propose(proposal, current, candidate, ref random);
+        if (_schema.TryApplyBoundaries(candidate))
+        {
+            double logPrior = _model.LogPrior(candidate);
+            if (logPrior > double.NegativeInfinity)
+            {
+                double logLikelihood = _model.LogLikelihood(candidate);
+                double beta = _temperatures[chain].InverseTemperature;
+                double logAcceptance = beta * (logLikelihood - _logLikelihoods[chain]) + (logPrior - _logPriors[chain]) + logProposalRatio;
+                // NaN (e.g. 0·∞ at β = 0 with ln L = −∞, or a NaN likelihood) compares false: rejected.
+                if (logLikelihood > double.NegativeInfinity && MetropolisTest.Accepts(logAcceptance, ref random))
+                {
+                    candidate.CopyTo(current);
+                    _logPriors[chain] = logPrior;
+                    _logLikelihoods[chain] = logLikelihood;
+                    mixture.RecordAcceptance(proposal);
+                }
+            }
+        }
+
+        mixture.Observe(current);
+    }
+
+    private void SwapRound()
+    {
+        ReadOnlySpan<double> betas = _ladder.InverseTemperatures;
+        Array.Clear(_acceptedPerPair);
+        for (int rung = _ladder.Count - 2; rung >= 0; rung--)
+        {
+            double deltaBeta = betas[rung] - betas[rung + 1];
+            for (int r = 0; r < _replicas; r++)
+            {
+                int cold = rung * _replicas + r;
+                int hot = cold + _replicas;
+                double logAcceptance = deltaBeta * (_logLikelihoods[hot] - _logLikelihoods[cold]);
+                if (MetropolisTest.Accepts(logAcceptance, ref _swapRandom))
+                {
+                    Exchange(cold, hot);
+                    _acceptedPerPair[rung]++;
+                }
+            }
+        }
+
+        _ladder.RecordRound(_acceptedPerPair, _replicas);
+        for (int c = 0; c < _chainCount; c++)
+        {
+            _temperatures[c].InverseTemperature = _ladder.InverseTemperatures[c / _replicas];
+        }
+    }
+
+    private void Exchange(int first, int second)
+    {
+        Span<double> a = _positions.AsSpan(first * _dimension, _dimension);
+        Span<double> b = _positions.AsSpan(second * _dimension, _dimension);
+        a.CopyTo(_swapBuffer);
+        b.CopyTo(a);
+        _swapBuffer.AsSpan().CopyTo(b);
+        (_logLikelihoods[first], _logLikelihoods[second]) = (_logLikelihoods[second], _logLikelihoods[first]);
+        (_logPriors[first], _logPriors[second]) = (_logPriors[second], _logPriors[first]);
+    }
+
+    private readonly struct NoSampleSink : ISampleSink
+    {
+        public void OnSample(long step, int replica, ReadOnlySpan<double> position, double logLikelihood, double logPrior)
+        {
+        }
+    }
+}

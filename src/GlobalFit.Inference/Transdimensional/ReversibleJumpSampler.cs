@@ -1,0 +1,501 @@
+using System.Collections.Immutable;
+using GlobalFit.Inference.Diagnostics;
+using GlobalFit.Inference.Parameters;
+using GlobalFit.Inference.Proposals;
+using GlobalFit.Inference.Random;
+using GlobalFit.Inference.State;
+using GlobalFit.Inference.Tempering;
+using GlobalFit.Inference.Targets;
+
+namespace GlobalFit.Inference.Transdimensional;
+
+/// <summary>
+/// Reversible-jump MCMC over a variable number of same-kind sources, with parallel tempering: each chain
+/// holds a whole variable-size configuration and swaps exchange whole configurations.
+/// </summary>
+/// <remarks>
+/// <para>Green (1995), "Reversible jump Markov chain Monte Carlo computation and Bayesian model
+/// determination", Biometrika 82(4), 711. The target on labelled configurations is
+/// π_β(k, θ_1..θ_k) ∝ p(k) Π p(θ_j) L(θ_1..θ_k)^β, which is symmetric in the labels.</para>
+/// <para>Moves per step and chain: with probability <see cref="ReversibleJumpSettings.JumpProbability"/> a
+/// birth or death, otherwise a within-model move of one uniformly chosen source by the proposal mixture.
+/// Given k, a birth is chosen with probability b_k (1 at k = 0, 0 at the cap, ½ otherwise) and a death with
+/// d_k = 1 − b_k. A birth draws u ~ b(·) from the <see cref="IBirthDensity"/>, appends it and swaps it with
+/// a uniformly chosen slot among the k+1; a death picks one of the k slots uniformly, swaps it to the end
+/// and drops it, which is the exact inverse. The slot-choice probabilities 1/(k+1) cancel, the dimension
+/// matching is the identity (u becomes θ_new) so the Jacobian is 1, and the acceptance probabilities are
+/// birth: min{1, π_β(k+1, θ′)/π_β(k, θ) · d_{k+1} / (b_k b(u))} and
+/// death: min{1, π_β(k−1, θ′)/π_β(k, θ) · b_{k−1} b(θ_removed) / d_k}
+/// (Green 1995, eq. 7 with the dimension-matching of §3.3).</para>
+/// <para>Split/merge moves are not implemented; births from a data-driven density (e.g. an F-statistic map)
+/// usually serve the same purpose for well-separated sources.</para>
+/// <para>Steady-state steps allocate nothing. Not thread-safe.</para>
+/// </remarks>
+/// <typeparam name="TModel">The model; a struct or sealed class gets a devirtualised loop.</typeparam>
+public sealed class ReversibleJumpSampler<TModel>
+    where TModel : ITransdimensionalModel
+{
+    private const int BirthsProposed = 0;
+    private const int BirthsAccepted = 1;
+    private const int DeathsProposed = 2;
+    private const int DeathsAccepted = 3;
+    private const int JumpCounterCount = 4;
+    private const ulong SwapStreamId = ulong.MaxValue;
+
+    private readonly TModel _model;
+    private readonly IBirthDensity _birth;
+    private readonly ReversibleJumpSettings _settings;
+    private readonly ParameterSchema _schema;
+    private readonly IPriorDensity _sourcePrior;
+    private readonly int _dimension;
+    private readonly int _maxSources;
+    private readonly int _replicas;
+    private readonly int _chainCount;
+    private readonly TemperatureLadder _ladder;
+    private readonly ProposalMixture[] _mixtures;
+    private readonly ChainTemperature[] _temperatures;
+    private readonly double[][] _sources;
+    private readonly int[] _counts;
+    private readonly double[] _logLikelihoods;
+    private readonly double[] _logPriors;
+    private readonly RandomStream[] _random;
+    private readonly long[] _jumpCounters;
+    private readonly double[] _removedSource;
+    private readonly int[] _acceptedPerPair;
+    private readonly EvidenceAccumulator _evidence;
+    private double[] _candidate;
+    private RandomStream _swapRandom;
+
+    /// <summary>Creates a sampler; every chain starts with <see cref="ReversibleJumpSettings.InitialSourceCount"/> prior draws.</summary>
+    /// <param name="model">The model.</param>
+    /// <param name="birth">The birth density.</param>
+    /// <param name="settings">The settings; validated here.</param>
+    /// <exception cref="ArgumentException">Invalid settings (the parameter name is the offending field).</exception>
+    /// <exception cref="InvalidOperationException">The initial configuration has zero posterior density.</exception>
+    public ReversibleJumpSampler(TModel model, IBirthDensity birth, ReversibleJumpSettings settings)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(birth);
+        ArgumentNullException.ThrowIfNull(settings);
+        settings.Validate();
+        _model = model;
+        _birth = birth;
+        _settings = settings;
+        _schema = model.SourceSchema ?? throw new ArgumentException("Model source schema must not be null.", nameof(model));
+        _sourcePrior = model.SourcePrior ?? throw new ArgumentException("Model source prior must not be null.", nameof(model));
+        _dimension = _schema.Dimension;
+        _maxSources = settings.MaxSources;
+        _replicas = settings.Tempering.ChainsPerTemperature;
+        _chainCount = checked(settings.Tempering.TemperatureCount * _replicas);
+        _ladder = new TemperatureLadder(settings.Tempering);
+        int capacity = checked(Math.Max(_maxSources, 1) * _dimension);
+        _sources = new double[_chainCount][];
+        _candidate = new double[capacity];
+        _removedSource = new double[_dimension];
+        _counts = new int[_chainCount];
+        _logLikelihoods = new double[_chainCount];
+        _logPriors = new double[_chainCount];
+        _random = new RandomStream[_chainCount];
+        _jumpCounters = new long[_chainCount * JumpCounterCount];
+        _acceptedPerPair = new int[Math.Max(_ladder.Count - 1, 0)];
+        _evidence = new EvidenceAccumulator(_ladder.Count);
+        _temperatures = new ChainTemperature[_chainCount];
+        _mixtures = new ProposalMixture[_chainCount];
+        _swapRandom = RandomStream.ForPath(settings.Seed, settings.StreamId, SwapStreamId);
+        for (int c = 0; c < _chainCount; c++)
+        {
+            int rung = c / _replicas;
+            _sources[c] = new double[capacity];
+            _random[c] = RandomStream.ForPath(settings.Seed, settings.StreamId, (ulong)c);
+            _temperatures[c] = new ChainTemperature(rung, _ladder.InverseTemperatures[rung]);
+            var context = new ProposalContext(_schema, _sourcePrior, _temperatures[c], default);
+            _mixtures[c] = new ProposalMixture(settings.WithinProposals, context, settings.Seed, settings.StreamId, (ulong)c);
+            Initialise(c, settings.InitialSourceCount);
+        }
+    }
+
+    /// <summary>Recreates a sampler from a saved state; the continuation is bit-identical to the original run.</summary>
+    /// <param name="model">The same model as the original run.</param>
+    /// <param name="birth">The same birth density as the original run.</param>
+    /// <param name="settings">The same settings as the original run.</param>
+    /// <param name="state">The saved state.</param>
+    /// <returns>The resumed sampler.</returns>
+    public static ReversibleJumpSampler<TModel> Resume(TModel model, IBirthDensity birth, ReversibleJumpSettings settings, ReversibleJumpState state)
+    {
+        ArgumentNullException.ThrowIfNull(state);
+        var sampler = new ReversibleJumpSampler<TModel>(model, birth, settings);
+        sampler.RestoreState(state);
+        return sampler;
+    }
+
+    /// <summary>Parameters per source d.</summary>
+    public int SourceDimension => _dimension;
+
+    /// <summary>Total number of chains (rungs × replicas).</summary>
+    public int ChainCount => _chainCount;
+
+    /// <summary>Number of cold replicas; chains 0 .. ColdChainCount − 1 are cold.</summary>
+    public int ColdChainCount => _replicas;
+
+    /// <summary>Steps taken so far.</summary>
+    public long Step { get; private set; }
+
+    /// <summary>Current β per rung.</summary>
+    public ReadOnlySpan<double> InverseTemperatures => _ladder.InverseTemperatures;
+
+    /// <summary>Number of sources k held by chain <paramref name="chain"/>.</summary>
+    /// <param name="chain">Chain index.</param>
+    /// <returns>k.</returns>
+    public int SourceCount(int chain) => _counts[chain];
+
+    /// <summary>The k × d source values of chain <paramref name="chain"/>, source-major.</summary>
+    /// <param name="chain">Chain index.</param>
+    /// <returns>A view valid until the next step.</returns>
+    public ReadOnlySpan<double> Sources(int chain) => _sources[chain].AsSpan(0, _counts[chain] * _dimension);
+
+    /// <summary>ln L of chain <paramref name="chain"/>.</summary>
+    /// <param name="chain">Chain index.</param>
+    /// <returns>The log likelihood.</returns>
+    public double LogLikelihood(int chain) => _logLikelihoods[chain];
+
+    /// <summary>The random stream of chain <paramref name="chain"/> (for determinism checks).</summary>
+    /// <param name="chain">Chain index.</param>
+    /// <returns>A copy of the stream state.</returns>
+    public RandomStream ChainRandom(int chain) => _random[chain];
+
+    /// <summary>Runs <paramref name="steps"/> steps.</summary>
+    /// <param name="steps">Number of steps, ≥ 0.</param>
+    public void Advance(int steps) => Advance(steps, default(NoSampleSink));
+
+    /// <summary>Runs <paramref name="steps"/> steps and hands every cold configuration to <paramref name="sink"/> after each.</summary>
+    /// <typeparam name="TSink">Sink type; generic so a struct sink is not boxed.</typeparam>
+    /// <param name="steps">Number of steps, ≥ 0.</param>
+    /// <param name="sink">The sample sink.</param>
+    public void Advance<TSink>(int steps, TSink sink)
+        where TSink : ITransdimensionalSampleSink
+    {
+        ArgumentOutOfRangeException.ThrowIfNegative(steps);
+        for (int s = 0; s < steps; s++)
+        {
+            for (int c = 0; c < _chainCount; c++)
+            {
+                UpdateChain(c);
+            }
+
+            Step++;
+            if (_ladder.Count > 1 && Step % _settings.Tempering.SwapInterval == 0)
+            {
+                SwapRound();
+            }
+
+            for (int c = 0; c < _chainCount; c++)
+            {
+                _evidence.Add(c / _replicas, _logLikelihoods[c]);
+            }
+
+            for (int r = 0; r < _replicas; r++)
+            {
+                sink.OnSample(Step, r, _counts[r], Sources(r), _logLikelihoods[r], _logPriors[r]);
+            }
+        }
+    }
+
+    /// <summary>Clears the ⟨ln L⟩ accumulators.</summary>
+    public void ResetEvidenceAccumulators() => _evidence.Reset();
+
+    /// <summary>Thermodynamic-integration evidence (marginalised over k) since the last reset.</summary>
+    /// <returns>The estimate.</returns>
+    public EvidenceEstimate EstimateEvidence() =>
+        ThermodynamicIntegration.LogEvidence(_ladder.InverseTemperatures, _evidence.Means());
+
+    /// <summary>A snapshot of acceptance (within-model, birth, death), swap and ladder statistics.</summary>
+    /// <returns>The statistics.</returns>
+    public SamplerStatistics GetStatistics()
+    {
+        var proposals = ImmutableArray.CreateBuilder<ProposalAcceptance>();
+        for (int rung = 0; rung < _ladder.Count; rung++)
+        {
+            for (int j = 0; j < _settings.WithinProposals.Length; j++)
+            {
+                long proposed = 0, accepted = 0;
+                for (int r = 0; r < _replicas; r++)
+                {
+                    proposed += _mixtures[rung * _replicas + r].Proposed[j];
+                    accepted += _mixtures[rung * _replicas + r].Accepted[j];
+                }
+
+                proposals.Add(new ProposalAcceptance(_settings.WithinProposals[j].Name, rung, proposed, accepted));
+            }
+
+            long births = 0, birthsAccepted = 0, deaths = 0, deathsAccepted = 0;
+            for (int r = 0; r < _replicas; r++)
+            {
+                int offset = (rung * _replicas + r) * JumpCounterCount;
+                births += _jumpCounters[offset + BirthsProposed];
+                birthsAccepted += _jumpCounters[offset + BirthsAccepted];
+                deaths += _jumpCounters[offset + DeathsProposed];
+                deathsAccepted += _jumpCounters[offset + DeathsAccepted];
+            }
+
+            proposals.Add(new ProposalAcceptance("birth", rung, births, birthsAccepted));
+            proposals.Add(new ProposalAcceptance("death", rung, deaths, deathsAccepted));
+        }
+
+        return new SamplerStatistics(
+            Step,
+            [.. _ladder.InverseTemperatures],
+            proposals.ToImmutable(),
+            _ladder.SwapAcceptanceRates(),
+            [.. _evidence.Means()]);
+    }
+
+    /// <summary>Copies the complete sampler state (allocates; call between advances).</summary>
+    /// <returns>The state.</returns>
+    public ReversibleJumpState CaptureState()
+    {
+        int proposalCount = _settings.WithinProposals.Length;
+        var proposalStates = new ProposalState?[_chainCount][];
+        long[] proposed = new long[_chainCount * proposalCount];
+        long[] accepted = new long[_chainCount * proposalCount];
+        double[][] sources = new double[_chainCount][];
+        for (int c = 0; c < _chainCount; c++)
+        {
+            proposalStates[c] = _mixtures[c].CaptureStates();
+            _mixtures[c].Proposed.CopyTo(proposed, c * proposalCount);
+            _mixtures[c].Accepted.CopyTo(accepted, c * proposalCount);
+            sources[c] = (double[])_sources[c].Clone();
+        }
+
+        return new ReversibleJumpState(
+            Step, _dimension, _maxSources, _replicas, _ladder.InverseTemperatures.ToArray(), _ladder.Rounds,
+            (long[])_ladder.SwapsProposed.Clone(), (long[])_ladder.SwapsAccepted.Clone(),
+            (int[])_counts.Clone(), sources, (double[])_logLikelihoods.Clone(), (double[])_logPriors.Clone(),
+            (RandomStream[])_random.Clone(), _swapRandom, proposalStates, proposed, accepted,
+            (long[])_jumpCounters.Clone(), (double[])_evidence.Sums.Clone(), (long[])_evidence.Counts.Clone());
+    }
+
+    private void RestoreState(ReversibleJumpState state)
+    {
+        int proposalCount = _settings.WithinProposals.Length;
+        if (state.SourceDimension != _dimension || state.MaxSources != _maxSources || state.ChainsPerTemperature != _replicas
+            || state.SourceCounts.Length != _chainCount || state.Sources.Length != _chainCount
+            || state.ProposalStates.Length != _chainCount || state.ProposalsProposed.Length != _chainCount * proposalCount
+            || state.JumpCounters.Length != _jumpCounters.Length)
+        {
+            throw new ArgumentException("Saved state does not match the model and settings.", nameof(state));
+        }
+
+        Step = state.Step;
+        _ladder.Restore(state.InverseTemperatures, state.LadderRounds, state.SwapsProposed, state.SwapsAccepted);
+        for (int c = 0; c < _chainCount; c++)
+        {
+            if (state.Sources[c].Length != _sources[c].Length)
+            {
+                throw new ArgumentException("Saved source buffer has the wrong length.", nameof(state));
+            }
+
+            state.Sources[c].CopyTo(_sources[c], 0);
+            _mixtures[c].RestoreStates(
+                state.ProposalStates[c],
+                state.ProposalsProposed.AsSpan(c * proposalCount, proposalCount),
+                state.ProposalsAccepted.AsSpan(c * proposalCount, proposalCount));
+            _temperatures[c].InverseTemperature = _ladder.InverseTemperatures[c / _replicas];
+        }
+
+        state.SourceCounts.CopyTo(_counts, 0);
+        state.LogLikelihoods.CopyTo(_logLikelihoods, 0);
+        state.LogPriors.CopyTo(_logPriors, 0);
+        state.ChainRandom.CopyTo(_random, 0);
+        state.JumpCounters.CopyTo(_jumpCounters, 0);
+        _swapRandom = state.SwapRandom;
+        _evidence.Restore(state.EvidenceSums, state.EvidenceCounts);
+    }
+
+    private void Initialise(int chain, int count)
+    {
+        for (int j = 0; j < count; j++)
+        {
+            _sourcePrior.DrawFromPrior(_sources[chain].AsSpan(j * _dimension, _dimension), ref _random[chain]);
+        }
+
+        _counts[chain] = count;
+        _logPriors[chain] = LogPrior(_sources[chain], count);
+        _logLikelihoods[chain] = double.IsFinite(_logPriors[chain])
+            ? _model.LogLikelihood(_sources[chain].AsSpan(0, count * _dimension), count)
+            : double.NegativeInfinity;
+        if (!double.IsFinite(_logLikelihoods[chain]))
+        {
+            throw new InvalidOperationException("The initial configuration has zero prior or likelihood.");
+        }
+    }
+
+    private double LogPrior(double[] sources, int count)
+    {
+        double logPrior = _model.LogCountPrior(count);
+        for (int j = 0; j < count && logPrior > double.NegativeInfinity; j++)
+        {
+            logPrior += _sourcePrior.LogPrior(sources.AsSpan(j * _dimension, _dimension));
+        }
+
+        return logPrior;
+    }
+
+    private double BirthProbability(int count) => count == 0 ? 1.0 : count >= _maxSources ? 0.0 : 0.5;
+
+    private void UpdateChain(int chain)
+    {
+        ref RandomStream random = ref _random[chain];
+        if (_maxSources > 0 && random.NextDouble() < _settings.JumpProbability)
+        {
+            if (random.NextDouble() < BirthProbability(_counts[chain]))
+            {
+                Birth(chain, ref random);
+            }
+            else
+            {
+                Death(chain, ref random);
+            }
+        }
+        else if (_counts[chain] > 0)
+        {
+            WithinModel(chain, ref random);
+        }
+    }
+
+    private void Birth(int chain, ref RandomStream random)
+    {
+        int count = _counts[chain];
+        int length = count * _dimension;
+        _jumpCounters[chain * JumpCounterCount + BirthsProposed]++;
+        _sources[chain].AsSpan(0, length).CopyTo(_candidate);
+        Span<double> newborn = _candidate.AsSpan(length, _dimension);
+        double logBirthDensity = _birth.Draw(newborn, ref random);
+        if (!_schema.Contains(newborn) || !(logBirthDensity > double.NegativeInfinity))
+        {
+            return;
+        }
+
+        int slot = random.NextInt(count + 1);
+        SwapSources(_candidate, slot, count);
+        double logJumpRatio = Math.Log(1.0 - BirthProbability(count + 1)) - Math.Log(BirthProbability(count)) - logBirthDensity;
+        if (TryAccept(chain, count + 1, logJumpRatio, ref random))
+        {
+            _jumpCounters[chain * JumpCounterCount + BirthsAccepted]++;
+        }
+    }
+
+    private void Death(int chain, ref RandomStream random)
+    {
+        int count = _counts[chain];
+        _jumpCounters[chain * JumpCounterCount + DeathsProposed]++;
+        _sources[chain].AsSpan(0, count * _dimension).CopyTo(_candidate);
+        int slot = random.NextInt(count);
+        SwapSources(_candidate, slot, count - 1);
+        _candidate.AsSpan((count - 1) * _dimension, _dimension).CopyTo(_removedSource);
+        double logJumpRatio = Math.Log(BirthProbability(count - 1)) + _birth.LogDensity(_removedSource) - Math.Log(1.0 - BirthProbability(count));
+        if (TryAccept(chain, count - 1, logJumpRatio, ref random))
+        {
+            _jumpCounters[chain * JumpCounterCount + DeathsAccepted]++;
+        }
+    }
+
+    private void WithinModel(int chain, ref RandomStream random)
+    {
+        int count = _counts[chain];
+        ProposalMixture mixture = _mixtures[chain];
+        double[] sources = _sources[chain];
+        int slot = random.NextInt(count);
+        sources.AsSpan(0, count * _dimension).CopyTo(_candidate);
+        ReadOnlySpan<double> current = sources.AsSpan(slot * _dimension, _dimension);
+        Span<double> moved = _candidate.AsSpan(slot * _dimension, _dimension);
+        int proposal = mixture.Choose(ref random);
+        double logProposalRatio = mixture.Propose(proposal, current, moved, ref random);
+        if (_schema.TryApplyBoundaries(moved) && TryAccept(chain, count, logProposalRatio, ref random))
+        {
+            mixture.RecordAcceptance(proposal);
+        }
+
+        mixture.Observe(_sources[chain].AsSpan(slot * _dimension, _dimension));
+    }
+
+    /// <summary>Scores the configuration in <see cref="_candidate"/> and, if accepted, makes it the chain's state.</summary>
+    private bool TryAccept(int chain, int candidateCount, double logProposalRatio, ref RandomStream random)
+    {
+        double logPrior = LogPrior(_candidate, candidateCount);
+        if (!(logPrior > double.NegativeInfinity))
+        {
+            return false;
+        }
+
+        double logLikelihood = _model.LogLikelihood(_candidate.AsSpan(0, candidateCount * _dimension), candidateCount);
+        if (!(logLikelihood > double.NegativeInfinity))
+        {
+            return false;
+        }
+
+        double beta = _temperatures[chain].InverseTemperature;
+        double logAcceptance = beta * (logLikelihood - _logLikelihoods[chain]) + (logPrior - _logPriors[chain]) + logProposalRatio;
+        if (!MetropolisTest.Accepts(logAcceptance, ref random))
+        {
+            return false;
+        }
+
+        // The candidate buffer becomes the chain's buffer; the old one is recycled as the next candidate.
+        (_sources[chain], _candidate) = (_candidate, _sources[chain]);
+        _counts[chain] = candidateCount;
+        _logPriors[chain] = logPrior;
+        _logLikelihoods[chain] = logLikelihood;
+        return true;
+    }
+
+    private void SwapSources(double[] buffer, int first, int second)
+    {
+        if (first == second)
+        {
+            return;
+        }
+
+        Span<double> a = buffer.AsSpan(first * _dimension, _dimension);
+        Span<double> b = buffer.AsSpan(second * _dimension, _dimension);
+        for (int i = 0; i < _dimension; i++)
+        {
+            (a[i], b[i]) = (b[i], a[i]);
+        }
+    }
+
+    private void SwapRound()
+    {
+        ReadOnlySpan<double> betas = _ladder.InverseTemperatures;
+        Array.Clear(_acceptedPerPair);
+        for (int rung = _ladder.Count - 2; rung >= 0; rung--)
+        {
+            double deltaBeta = betas[rung] - betas[rung + 1];
+            for (int r = 0; r < _replicas; r++)
+            {
+                int cold = rung * _replicas + r;
+                int hot = cold + _replicas;
+                if (MetropolisTest.Accepts(deltaBeta * (_logLikelihoods[hot] - _logLikelihoods[cold]), ref _swapRandom))
+                {
+                    (_sources[cold], _sources[hot]) = (_sources[hot], _sources[cold]);
+                    (_counts[cold], _counts[hot]) = (_counts[hot], _counts[cold]);
+                    (_logLikelihoods[cold], _logLikelihoods[hot]) = (_logLikelihoods[hot], _logLikelihoods[cold]);
+                    (_logPriors[cold], _logPriors[hot]) = (_logPriors[hot], _logPriors[cold]);
+                    _acceptedPerPair[rung]++;
+                }
+            }
+        }
+
+        _ladder.RecordRound(_acceptedPerPair, _replicas);
+        for (int c = 0; c < _chainCount; c++)
+        {
+            _temperatures[c].InverseTemperature = _ladder.InverseTemperatures[c / _replicas];
+        }
+    }
+
+    private readonly struct NoSampleSink : ITransdimensionalSampleSink
+    {
+        public void OnSample(long step, int replica, int sourceCount, ReadOnlySpan<double> sources, double logLikelihood, double logPrior)
+        {
+        }
+    }
+}

@@ -1,6 +1,5 @@
 using System.CommandLine;
 using System.Globalization;
-using System.Text.Json;
 using GlobalFit.Cli.Bench;
 
 namespace GlobalFit.Cli.Commands;
@@ -36,7 +35,7 @@ public static class BenchCommand
                 },
             };
             foreach (var f in figures) values[f.Name] = f.Value;
-            context.Out.WriteLine(JsonSerializer.Serialize(values));
+            context.Out.WriteLine(CliJson.Serialize(values));
         }
         else
         {

@@ -1,7 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
 using System.Text;
-using System.Text.Json;
 using GlobalFit.Cli.Console;
 using GlobalFit.Cli.Plotting;
 using GlobalFit.Physics.Input;
@@ -71,7 +70,7 @@ public static class SensitivityCommand
         var (fBest, sBest) = table.Minimum();
         if (r.Json)
         {
-            context.Out.WriteLine(JsonSerializer.Serialize(new Dictionary<string, object?>
+            context.Out.WriteLine(CliJson.Serialize(new Dictionary<string, object?>
             {
                 ["csv"] = csvPath,
                 ["png"] = pngPath,

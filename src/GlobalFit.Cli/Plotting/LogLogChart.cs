@@ -16,7 +16,7 @@ public sealed class LogLogChart
         _plot.Title(title);
         _plot.XLabel(xLabel);
         _plot.YLabel(yLabel);
-        foreach (var axis in new[] { _plot.Axes.Bottom, _plot.Axes.Left })
+        foreach (ScottPlot.IAxis axis in new ScottPlot.IAxis[] { _plot.Axes.Bottom, _plot.Axes.Left })
         {
             axis.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic
             {

@@ -23,7 +23,7 @@ public static class ObservationFile
         ArgumentNullException.ThrowIfNull(observation);
         ArgumentException.ThrowIfNullOrWhiteSpace(path);
         var tree = ObservationFileWriter.BuildTree(observation);
-        AtomicFileWrite.Write(path, overwrite, stream => tree.Write(stream));
+        AtomicFile.Write(path, overwrite, stream => tree.Write(stream));
     }
 
     /// <summary>Reads and checks a whole observation file; X/Y/Z channels are converted to A/E/T.</summary>

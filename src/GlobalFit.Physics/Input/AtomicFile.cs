@@ -1,12 +1,11 @@
-using GlobalFit.Physics.Input;
 
-namespace GlobalFit.Physics.DataFiles;
+namespace GlobalFit.Physics.Input;
 
 /// <summary>Writes a file so that readers see either the old file or the complete new one, never a half-written file.</summary>
 /// <remarks>The content goes to a hidden temporary file in the destination folder (same file system, so the
 /// final rename is atomic), is flushed to disk, and is then renamed over the destination. On any failure the
 /// temporary file is deleted and the destination is left as it was.</remarks>
-internal static class AtomicFileWrite
+public static class AtomicFile
 {
     /// <summary>Writes <paramref name="path"/> through <paramref name="writeContent"/>.</summary>
     /// <exception cref="InvalidInputException">The path exists and <paramref name="overwrite"/> is false, its folder

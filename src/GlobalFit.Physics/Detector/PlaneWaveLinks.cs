@@ -10,7 +10,8 @@ namespace GlobalFit.Physics.Detector;
 /// The receiver is taken at the reception time t, the sender at the emission time t − τ_ij with τ_ij from
 /// <see cref="IConstellationOrbits.LightTimeSeconds"/>, and n is the direction of the photon path between those
 /// two events, <c>(x_i(t) − x_j(t − τ_ij))/|…|</c>. Within the plane-wave, straight-path model this is exact;
-/// no long-wavelength or rigid-adiabatic approximation is made.</para>
+/// no long-wavelength or rigid-adiabatic approximation is made (the light times are those of the orbit model; see
+/// <see cref="RigidOrbits"/> for its constant-L/c approximation).</para>
 /// <para>Immutable and thread-safe when the strain and orbits are.</para>
 /// </remarks>
 public sealed class PlaneWaveLinks : IOneWayLinks
@@ -47,6 +48,9 @@ public sealed class PlaneWaveLinks : IOneWayLinks
         var (emittedPlus, emittedCross) = _strain.At(t - tau - k.Dot(senderPosition) / c);
         var (receivedPlus, receivedCross) = _strain.At(t - k.Dot(receiverPosition) / c);
         double contracted = patternPlus * (emittedPlus - receivedPlus) + patternCross * (emittedCross - receivedCross);
-        return contracted / (2.0 * (1.0 - k.Dot(n)));
+        double alignment = 1.0 - k.Dot(n);
+        // A wave running exactly along the beam rides with the photon: the pattern and the strain difference vanish
+        // together with the denominator, and the limit is zero (not the 0/0 that floating point would give).
+        return alignment == 0.0 ? 0.0 : contracted / (2.0 * alignment);
     }
 }

@@ -10,8 +10,8 @@ namespace GlobalFit.Physics.Detector;
 /// <c>x_n = R cos α + (eR/2)[cos(2α − β_n) − 3 cos β_n]</c>, <c>y_n = R sin α + (eR/2)[sin(2α − β_n) − 3 sin β_n]</c>,
 /// <c>z_n = −√3 eR cos(α − β_n)</c>. The centroid moves on a circle of radius R, the triangle plane is tilted
 /// 60° to the ecliptic and the triangle turns once per period within that plane, against the orbital sense.</para>
-/// <para>Light times are the constant L/c: the Sagnac and point-ahead differences (~1e-5 of L/c, §B.1) are
-/// ignored, consistently with the rigid model.</para>
+/// <para>Light times are the constant L/c: the point-ahead correction (~1e-4 of L/c) and the Sagnac difference
+/// between the two senses of circulation (~1e-5 s, §B.1) are ignored, consistently with the rigid model.</para>
 /// <para>The default period is the sidereal year, the period of an orbit fixed relative to the stars; the
 /// default radius is 1 au.</para>
 /// </remarks>

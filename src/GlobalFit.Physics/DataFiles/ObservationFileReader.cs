@@ -49,8 +49,8 @@ internal sealed class ObservationFileReader : IDisposable
         }
         catch (Exception e) when (e is not OutOfMemoryException)
         {
-            // PureHDF reports a missing signature, a bad superblock and a file shorter than its
-            // recorded end (a truncated copy) this way, before anything else is read.
+            // What passed the signature and length check but PureHDF cannot parse (a damaged superblock
+            // or root object header) arrives here as a plain Exception.
             throw input.Error(null, $"is not a readable HDF5 file, or is truncated ({e.Message})", e);
         }
         return new ObservationFileReader(file, input);

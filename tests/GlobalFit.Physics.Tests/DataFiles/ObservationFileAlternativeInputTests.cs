@@ -19,7 +19,7 @@ public class ObservationFileAlternativeInputTests
     public void Michelson_channels_are_converted_to_aet_on_read()
     {
         // Source: A = (Z − X)/√2, E = (X − 2Y + Z)/√6, T = (X + Y + Z)/√3 (shared/reference/detector-noise-gb.md §C.3,
-        // Prince et al. 2002, PRD 66, 122002), evaluated by hand for round inputs. 1e-15 relative: one or two roundings.
+        // tagged [DER]), evaluated by hand for round inputs. 1e-15 relative: one or two roundings.
         using var folder = new TempFolder();
         var tree = ObservationSamples.ValidTree(count: 3, channels: "XYZ");
         tree.Tdi()["X"] = new[] { 1.0, 0.0, 2e-21 };
@@ -61,6 +61,10 @@ public class ObservationFileAlternativeInputTests
             Assert.Equal(a, observation.Data.A.Samples[i]);
             Assert.Equal(e, observation.Data.E.Samples[i]);
             Assert.Equal(t, observation.Data.T.Samples[i]);
+            // Identity: the three coefficient rows are orthonormal, so the map preserves X² + Y² + Z².
+            // 4e-15 relative: about ten roundings (coefficients, products, sums) of 2.2e-16 each, worst case.
+            double before = x[i] * x[i] + y[i] * y[i] + z[i] * z[i];
+            Assert.Equal(before, a * a + e * e + t * t, before * 4e-15);
         }
         Assert.Equal("XYZ", ObservationFile.ReadSummary(folder.File("alt.h5")).StoredChannels);
     }

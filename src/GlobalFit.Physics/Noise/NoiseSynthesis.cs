@@ -20,6 +20,10 @@ namespace GlobalFit.Physics.Noise;
 /// <c>Re ñ_1, Im ñ_1, Re ñ_2, Im ñ_2, …</c> up to the last complex bin, then (even N only) the Nyquist bin.</para>
 /// <para>The output is periodic over T (a circulant process): correlations wrap around the record ends, which
 /// is harmless when T is much longer than the noise correlation time.</para>
+/// <para>Implementation note (Release build, shared 2-core machine, <see cref="NoiseSynthesisProbe"/>): one Julian
+/// year of A, E and T at 5 s (N = 6,311,520 = 2⁵·3⁴·5·487) took 112–121 s, almost all of it in the general-length
+/// inverse FFT of <see cref="FourierTransform"/>; the nearest power of two, N = 2²³ (≈ 3.76 s cadence), took
+/// 7–10 s. Prefer power-of-two lengths for long simulations.</para>
 /// </remarks>
 public static class NoiseSynthesis
 {

@@ -25,8 +25,9 @@ public class FourierTransformTests
     [Theory]
     [InlineData(64)]     // packed power-of-two path
     [InlineData(1024)]
-    [InlineData(90)]     // general (Bluestein) path
+    [InlineData(90)]     // packed, Bluestein on 45 points
     [InlineData(77)]     // odd length
+    [InlineData(974)]    // 2·487: packed, Bluestein on the half length
     public void Forward_transform_equals_the_direct_discrete_sum_times_the_cadence(int n)
     {
         var x = RandomSamples(n, seed: n);

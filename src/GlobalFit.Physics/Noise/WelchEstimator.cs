@@ -15,7 +15,8 @@ namespace GlobalFit.Physics.Noise;
 /// <c>P_k = c_k Σ_s |x̃_k|² / (K L Δt ⟨w²⟩)</c> with <c>c_k = 2</c> for <c>0 &lt; k &lt; L/2</c> and 1 at DC and
 /// Nyquist, so that <c>Σ_k P_k Δf</c> is the mean windowed power. No mean or trend is removed.</para>
 /// <para>Statistics: for Gaussian noise each bin is close to <c>S χ²_{2K'}/(2K')</c> with
-/// <c>K' ≈ K/(1 + 2ρ²)</c>, where <c>ρ = Σ w_n w_{n+L/2}/Σ w_n² = 1/3</c> is the Hann correlation of neighbouring
+/// <c>K' ≈ K/(1 + 2ρ²)</c>, where <c>ρ = Σ_n w_n w_{n+L/2}/Σ_n w_n² = 1/6</c> (the product is non-zero only on the
+/// overlapping half: mean sin²cos² = 1/8 over L/2 samples against mean sin⁴ = 3/8 over L) is the Hann correlation of neighbouring
 /// half-overlapped segments (Welch 1967); see <see cref="EffectiveSegmentCount"/>. The estimate is the PSD
 /// convolved with the window's spectral kernel (second moment 1/3 bin²), so it is biased where the PSD curves
 /// strongly on the scale of a bin.</para>
@@ -33,10 +34,10 @@ public static class WelchEstimator
         return (sampleCount - segmentLength) / (segmentLength / 2) + 1;
     }
 
-    /// <summary>Effective number of independent segments <c>K/(1 + 2ρ²)</c> with <c>ρ = 1/3</c> for the Hann window
+    /// <summary>Effective number of independent segments <c>K/(1 + 2ρ²)</c> with <c>ρ = 1/6</c> for the Hann window
     /// at 50 % overlap (Welch 1967's variance formula, neglecting the <c>1/K</c> end correction and segments two apart,
     /// which do not overlap).</summary>
-    public static double EffectiveSegmentCount(int segmentCount) => segmentCount / (1.0 + 2.0 / 9.0);
+    public static double EffectiveSegmentCount(int segmentCount) => segmentCount / (1.0 + 2.0 / 36.0);
 
     /// <summary>Welch PSD estimate of <paramref name="samples"/>.</summary>
     /// <param name="samples">The time series.</param>

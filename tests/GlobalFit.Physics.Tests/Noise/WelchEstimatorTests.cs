@@ -6,10 +6,29 @@ namespace GlobalFit.Physics.Tests.Noise;
 public class WelchEstimatorTests
 {
     // Statistics used below (Welch 1967, IEEE Trans. Audio Electroacoust. 15, 70): each Welch bin is close to
-    // S χ²_{2K'}/(2K') with K' = K/(1 + 2/9) for the Hann window at 50 % overlap. Neighbouring frequency bins of a
+    // S χ²_{2K'}/(2K') with K' = K/(1 + 2ρ²), ρ = 1/6, for the Hann window at 50 % overlap. Neighbouring frequency bins of a
     // Hann periodogram are correlated (power correlation 4/9), bins three apart only at 1/1296, so the tests use
     // every third bin and treat those as independent. Each statistical bound is 4σ: two-sided false-failure
     // probability 6e-5 per check for a random seed; seeds are fixed, so every run gives the same result.
+
+    // Source: Welch 1967 defines ρ = Σ w_n w_{n+D} / Σ w_n² for segments D apart; Harris 1978 (Proc. IEEE 66, 51),
+    // Table 1, lists 16.7 % "overlap correlation" for the Hann window at 50 % overlap (table value from memory).
+    // Computed here directly from the window weights, independently of the estimator.
+    [Fact]
+    public void Effective_segment_count_uses_the_hann_overlap_correlation_of_one_sixth()
+    {
+        const int length = 4096;
+        double overlap = 0, power = 0;
+        for (int n = 0; n < length; n++)
+        {
+            double w = GlobalFit.Physics.Series.TukeyWindow.Weight(n, length, 1.0);
+            power += w * w;
+            if (n + length / 2 < length) overlap += w * GlobalFit.Physics.Series.TukeyWindow.Weight(n + length / 2, length, 1.0);
+        }
+        double rho = overlap / power;
+        Assert.Equal(1.0 / 6.0, rho, 1e-3); // finite-L deviation from the continuum value is O(1/L)
+        Assert.Equal(100 / (1 + 2 * rho * rho), WelchEstimator.EffectiveSegmentCount(100), 1e-2);
+    }
 
     [Fact]
     public void White_noise_of_variance_sigma_squared_gives_two_sigma_squared_dt()

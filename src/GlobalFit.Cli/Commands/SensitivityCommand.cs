@@ -62,7 +62,10 @@ public static class SensitivityCommand
             chart.AddCurve("instrument + foreground (exact sky average)", table.FrequencyHz, table.ExactStrainPsd.Select(Math.Sqrt).ToArray());
             chart.AddCurve("approximate transfer function (Robson et al. 2019)", table.FrequencyHz, table.RobsonStrainPsd.Select(Math.Sqrt).ToArray());
             if (foreground is not null)
-                chart.AddCurve("confusion foreground", table.FrequencyHz, table.ForegroundStrainPsd.Select(Math.Sqrt).ToArray());
+                // Drawn only where it matters (above 0.1 % of the total); its exponential cut-off would otherwise
+                // stretch the axis over twenty decades.
+                chart.AddCurve("confusion foreground", table.FrequencyHz,
+                    table.ForegroundStrainPsd.Select((s, i) => s > 1e-3 * table.ExactStrainPsd[i] ? Math.Sqrt(s) : double.NaN).ToArray());
             byte[] bytes = chart.ToPng();
             AtomicFile.Write(pngPath, overwrite: true, stream => stream.Write(bytes));
         }

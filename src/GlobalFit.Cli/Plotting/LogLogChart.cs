@@ -7,12 +7,14 @@ namespace GlobalFit.Cli.Plotting;
 /// as decades (shared/notes/libraries.md §5).</remarks>
 public sealed class LogLogChart
 {
-    private readonly Plot _plot = new();
+    private readonly Plot _plot;
 
     /// <summary>Creates an empty chart with a title and axis labels.</summary>
     public LogLogChart(string title, string xLabel, string yLabel)
     {
+        // The font must be registered before the plot exists: a plot takes its fonts when it is created.
         PlotFonts.EnsureRegistered();
+        _plot = new Plot();
         _plot.Title(title);
         _plot.XLabel(xLabel);
         _plot.YLabel(yLabel);

@@ -19,10 +19,15 @@ public static class PlotFonts
         lock (Gate)
         {
             if (_registered) return;
-            string path = Path.Combine(AppContext.BaseDirectory, "Fonts", "DejaVuSans.ttf");
-            if (!File.Exists(path))
-                throw new FileNotFoundException($"bundled plot font missing from the installation: {path}", path);
-            ScottPlot.Fonts.AddFontFile(FamilyName, path, bold: false, italic: false);
+            // Titles are drawn bold, so the bold face is registered too; without it Skia would fall back
+            // to whatever the system has, which may be nothing.
+            foreach (var (file, bold) in new[] { ("DejaVuSans.ttf", false), ("DejaVuSans-Bold.ttf", true) })
+            {
+                string path = Path.Combine(AppContext.BaseDirectory, "Fonts", file);
+                if (!File.Exists(path))
+                    throw new FileNotFoundException($"bundled plot font missing from the installation: {path}", path);
+                ScottPlot.Fonts.AddFontFile(FamilyName, path, bold, italic: false);
+            }
             ScottPlot.Fonts.Default = FamilyName;
             _registered = true;
         }

@@ -12,5 +12,7 @@ public static class QuickBenchSuites
     public static IReadOnlyList<QuickBenchSuite> All { get; } =
     [
         new("inner product and FFT", SeriesBench.Run),
+        new("noise synthesis", NoiseBench.Run),
+        new("sampler overhead", SamplerBench.Run),
     ];
 }

@@ -1,0 +1,46 @@
+using System.Text.RegularExpressions;
+using GlobalFit.Cli.Tests.Support;
+using GlobalFit.Engine.Configuration;
+using GlobalFit.Engine.Simulation;
+
+namespace GlobalFit.Cli.Tests.Commands;
+
+/// <summary>The examples users copy from (configs/ and README) must stay valid.</summary>
+public class DocumentedExamplesTests
+{
+    public static TheoryData<string> ScenarioFiles()
+    {
+        var data = new TheoryData<string>();
+        foreach (var file in Directory.GetFiles(RepositoryFiles.PathOf("configs"), "scenario-*.toml").Order())
+            data.Add(Path.GetFileName(file));
+        return data;
+    }
+
+    [Theory]
+    [MemberData(nameof(ScenarioFiles))]
+    public void Every_shipped_scenario_is_valid(string file)
+    {
+        var scenario = SimulationScenario.FromConfig(ConfigDocument.Load(RepositoryFiles.PathOf(Path.Combine("configs", file))));
+        Assert.True(scenario.Observation.SampleCount > 0);
+    }
+
+    [Fact]
+    public void The_scenario_shown_in_the_readme_is_valid_and_matches_the_shipped_example()
+    {
+        string readme = File.ReadAllText(RepositoryFiles.PathOf("README.md"));
+        var block = Regex.Match(readme, "```toml\n(?<body>.*?)```", RegexOptions.Singleline);
+        Assert.True(block.Success, "README has no TOML example");
+        var fromReadme = SimulationScenario.FromConfig(ConfigDocument.Parse(block.Groups["body"].Value, "README.md"));
+        var shipped = SimulationScenario.FromConfig(ConfigDocument.Load(RepositoryFiles.PathOf("configs/scenario-noise-month.toml")));
+        Assert.Equal(shipped, fromReadme);
+    }
+
+    [Fact]
+    public void Readme_test_command_is_what_ci_runs()
+    {
+        string readme = File.ReadAllText(RepositoryFiles.PathOf("README.md"));
+        string ci = File.ReadAllText(RepositoryFiles.PathOf(".ci/run"));
+        Assert.Contains("dotnet test globalfit.sln -c Release --filter \"Category!=Long\"", readme);
+        Assert.Contains("dotnet test globalfit.sln -c Release --no-build --filter \"Category!=Long\"", ci);
+    }
+}

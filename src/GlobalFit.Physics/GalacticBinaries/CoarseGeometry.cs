@@ -1,0 +1,44 @@
+using GlobalFit.Physics.Constants;
+using GlobalFit.Physics.Detector;
+
+namespace GlobalFit.Physics.GalacticBinaries;
+
+/// <summary>Arm directions and midpoints of the constellation at the N coarse times <c>t_n = t0 + nT/N</c>, n = 0 … N (the last one closes the record).</summary>
+/// <remarks>Precomputed once per envelope length because they do not depend on the source: a template call then
+/// needs only dot products with the source's frame. Arm a joins spacecraft (1,2), (2,3), (3,1); its unit vector is
+/// <c>n_12</c>, <c>n_23</c>, <c>n_31</c> (from the second to the first, sheet §0) and its midpoint is shared by the
+/// two links along it. Midpoints are stored in light-seconds so that <c>k·x_mid/c</c> is one dot product.</remarks>
+internal sealed class CoarseGeometry
+{
+    public CoarseGeometry(IConstellationOrbits orbits, double startSeconds, double durationSeconds, int length)
+    {
+        Length = length;
+        // One point more than the grid: the sample at t0 + T closes the trapezoid rule (see the generator).
+        ArmUnit = new Vector3D[3 * (length + 1)];
+        MidpointLightSeconds = new Vector3D[3 * (length + 1)];
+        for (int n = 0; n <= length; n++)
+        {
+            double t = startSeconds + n * durationSeconds / length;
+            var p1 = orbits.Position(1, t);
+            var p2 = orbits.Position(2, t);
+            var p3 = orbits.Position(3, t);
+            Set(n, 0, p1, p2);
+            Set(n, 1, p2, p3);
+            Set(n, 2, p3, p1);
+        }
+    }
+
+    public int Length { get; }
+
+    /// <summary>Index <c>3n + a</c>: unit vector of arm a at coarse time n.</summary>
+    public Vector3D[] ArmUnit { get; }
+
+    /// <summary>Index <c>3n + a</c>: midpoint of arm a at coarse time n, divided by c.</summary>
+    public Vector3D[] MidpointLightSeconds { get; }
+
+    private void Set(int n, int arm, Vector3D receiver, Vector3D sender)
+    {
+        ArmUnit[3 * n + arm] = (receiver - sender).Normalized();
+        MidpointLightSeconds[3 * n + arm] = (0.5 / PhysicalConstants.SpeedOfLightMS) * (receiver + sender);
+    }
+}

@@ -1,12 +1,13 @@
 namespace GlobalFit.Cli.Commands;
 
-/// <summary>The built-in demo scenario: an invented month of data with instrument noise and the
-/// confusion foreground. Sources are added here as their classes arrive.</summary>
+/// <summary>The built-in demo scenario: an invented month of data with instrument noise, the confusion
+/// foreground and an invented population of galactic binaries. Other source classes join as they arrive.</summary>
 internal static class DemoScenario
 {
     public const string Toml = """
-        # Built-in demo: one invented month of observation, noise and galactic foreground only.
-        name = "demo: one quiet month"
+        # Built-in demo: one invented month of observation with noise, the galactic foreground and an
+        # invented population of galactic binaries (a few loud enough to be resolved over a weak crowd).
+        name = "demo: one month of galactic binaries"
         seed = 20261201
 
         [observation]
@@ -21,5 +22,10 @@ internal static class DemoScenario
         enabled = true
         fit_years = 1
         amplitude = 1.0
+
+        [galactic_binaries.population]
+        count = 4000
+        f_min_hz = 1e-3
+        f_max_hz = 8e-3
         """;
 }

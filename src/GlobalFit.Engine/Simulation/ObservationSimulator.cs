@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Numerics;
 using GlobalFit.Inference.Random;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Noise;
@@ -36,6 +37,8 @@ public static class ObservationSimulator
             progress?.Report(0.2 * (channel + 1));
         }
         AetTimeSeries data = NoiseSynthesis.SynthesiseAet(noise, n, dt, scenario.Observation.StartS, normals[0], normals[1], normals[2]);
+        progress?.Report(0.7);
+        var truth = InjectSources(scenario, noise, data);
         progress?.Report(0.9);
 
         var entries = new Dictionary<string, string>(notes)
@@ -45,9 +48,31 @@ public static class ObservationSimulator
             [ScenarioProvenanceKey] = scenario.ToToml(),
         };
         var provenance = new ObservationProvenance(generator, DateTimeOffset.UtcNow, entries);
-        var observation = new Observation(data, GapList.None, [], provenance);
+        var observation = new Observation(data, GapList.None, truth, provenance);
         progress?.Report(1.0);
         return observation;
+    }
+
+    // Sources are summed in the frequency domain (continuous convention) and added to the noise after one inverse
+    // transform per channel, so the cost is one FFT per channel whatever the number of sources.
+    private static List<TruthTable> InjectSources(SimulationScenario scenario, AetNoiseModel noise, AetTimeSeries data)
+    {
+        var truth = new List<TruthTable>();
+        if (scenario.Sources.Count == 0) return truth;
+        int bins = FourierTransform.OneSidedLength(data.Count);
+        var spectra = new[] { new Complex[bins], new Complex[bins], new Complex[bins] };
+        var context = new InjectionContext(scenario.Observation, noise, scenario.Seed);
+        foreach (var injection in scenario.Sources)
+            truth.Add(injection.Inject(context, spectra[0], spectra[1], spectra[2]));
+        var signal = new double[data.Count];
+        var channels = data.Channels;
+        for (int c = 0; c < 3; c++)
+        {
+            FourierTransform.Inverse(spectra[c], data.DtSeconds, signal);
+            var samples = channels[c].Samples;
+            for (int i = 0; i < samples.Length; i++) samples[i] += signal[i];
+        }
+        return truth;
     }
 
     /// <summary>The A/E/T noise model a scenario's noise settings describe.</summary>

@@ -9,7 +9,8 @@ namespace GlobalFit.Engine.Simulation;
 /// <param name="Seed">Run seed; every random stream of the simulation derives from it.</param>
 /// <param name="Observation">Duration, cadence and start time.</param>
 /// <param name="Noise">Instrument noise levels and the optional confusion foreground.</param>
-public sealed record SimulationScenario(string Name, ulong Seed, ObservationSettings Observation, NoiseSettings Noise)
+/// <param name="Sources">Injected sources, one entry per source class present in the file, in registration order.</param>
+public sealed record SimulationScenario(string Name, ulong Seed, ObservationSettings Observation, NoiseSettings Noise, IReadOnlyList<ISourceInjection> Sources)
 {
     /// <summary>Builds a scenario from a parsed configuration file, rejecting unknown keys and invalid values.</summary>
     /// <exception cref="Physics.Input.InvalidInputException">A key is unknown, missing, mistyped or out of range.</exception>
@@ -19,8 +20,12 @@ public sealed record SimulationScenario(string Name, ulong Seed, ObservationSett
         long seed = root.GetInteger("seed", 1, 0, long.MaxValue);
         var observation = ObservationSettings.FromConfig(root.GetTable("observation") ?? throw root.InvalidTable("the [observation] table is required"));
         var noise = NoiseSettings.FromConfig(root.GetTable("noise"), root);
-        root.RejectUnknownKeys(["name", "seed", "observation", "noise"]);
-        return new SimulationScenario(name, (ulong)seed, observation, noise);
+        var sources = new List<ISourceInjection>();
+        foreach (var sourceClass in SimulatedSourceClasses.All)
+            if (root.GetTable(sourceClass.ClassId) is { } section)
+                sources.Add(sourceClass.ReadScenario(section, observation));
+        root.RejectUnknownKeys(["name", "seed", "observation", "noise", .. SimulatedSourceClasses.All.Select(c => c.ClassId)]);
+        return new SimulationScenario(name, (ulong)seed, observation, noise, sources);
     }
 
     /// <summary>The scenario as TOML with every default written out, for provenance and reruns.</summary>
@@ -44,7 +49,7 @@ public sealed record SimulationScenario(string Name, ulong Seed, ObservationSett
         fit_years = {TomlText.Number(Noise.ForegroundFitYears)}
         amplitude = {TomlText.Number(Noise.ForegroundAmplitude)}
 
-        """;
+        """ + string.Concat(Sources.Select(s => "\n" + s.ToToml()));
 }
 
 /// <summary>The observation's time axis.</summary>

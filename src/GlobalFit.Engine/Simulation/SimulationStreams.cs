@@ -6,4 +6,7 @@ public static class SimulationStreams
 {
     /// <summary>Instrument and foreground noise; the second path element is the channel (0 = A, 1 = E, 2 = T).</summary>
     public const ulong Noise = 1;
+
+    /// <summary>The galactic-binary population; the second path element is 0.</summary>
+    public const ulong GalacticBinaryPopulation = 2;
 }

@@ -33,7 +33,9 @@ public class SimulationScenarioTests
             fit_years = 4
             amplitude = 0.5
             """);
-        Assert.Equal(s, Parse(s.ToToml()));
+        Assert.Equal(s.ToToml(), Parse(s.ToToml()).ToToml());
+        Assert.Equal(s.Observation, Parse(s.ToToml()).Observation);
+        Assert.Equal(s.Noise, Parse(s.ToToml()).Noise);
     }
 
     [Theory]

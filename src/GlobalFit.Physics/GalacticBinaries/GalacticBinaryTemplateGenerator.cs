@@ -13,14 +13,19 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// times <c>t_n = t0 + nT/N</c> (N from <see cref="EnvelopeLengthRule"/>) with the rigid-adiabatic link formula of
 /// §C.1 (arm direction, midpoint and frequency taken at t_n):
 /// <c>g_ij = −i (x/2)(n·H·n) sinc[(x/2)(1 − k·n)] exp(i[Φ(t) − 2πf_q(t − t0) − 2πf k·x_mid/c − x/2])</c>,
-/// <c>x = f(t)/f*</c>; the first-generation Michelson combinations act on the envelopes with the delay
-/// <c>D = e^{−ix}</c> (§F.2 step 6); A, E, T follow (§C.3); an N-point FFT scaled by <c>T/(2N)</c> gives the
-/// full-resolution bins <c>q − N/2 … q + N/2 − 1</c> in the continuous-transform convention of
-/// <see cref="FourierTransform"/> (step 8). The arm directions and midpoints at the coarse times do not depend on the
-/// source and are computed once, for every envelope length the rule can choose, when the generator is built.</para>
-/// <para>Accuracy against <see cref="SlowReferenceResponse"/> (exact links, exact delays, full cadence) is measured by
-/// the tests in tests/GlobalFit.Physics.Tests/GalacticBinaries (match ≥ 0.999 from 0.1 to 20 mHz for one month and
-/// one year of data with the default rule). The rigid-adiabatic form ignores the change of the arms during one light
+/// <c>x = 2π f(t) τ_a</c> with τ_a the light time of the link's arm; the first-generation Michelson combinations act on
+/// the envelopes with one delay <c>D_a = e^{−ix_a}</c> per arm (§F.2 step 6; equal arms for rigid orbits, flexing ones
+/// for <see cref="EccentricOrbits"/>, which matters for T at low frequency); A, E, T follow (§C.3); an N-point FFT
+/// scaled by <c>T/(2N)</c> gives the full-resolution bins <c>q − N/2 … q + N/2 − 1</c> in the continuous-transform
+/// convention of <see cref="FourierTransform"/> (step 8). Our addition to step 8 is an end correction (the ramp
+/// between the envelope's values at t0 and t0 + T is taken out before the FFT and its exact transform added back; see
+/// <c>ToBins</c>): without it the FFT is only first-order accurate for envelopes that are not periodic over the record,
+/// which is every source off a bin centre. Arm directions, midpoints and light times at the coarse times do not depend
+/// on the source and are computed once, for every envelope length the rule can choose, when the generator is built.</para>
+/// <para>Accuracy against <see cref="SlowReferenceResponse"/> (exact links, exact delays, full cadence), measured by
+/// tests/GlobalFit.Physics.Tests/GalacticBinaries on the template's bins with A/E/T noise weighting: worst overlap
+/// 0.99933 over one month (46 seeded sources, 0.1–20 mHz, rigid orbits), 0.99989 over one year (8 sources), 0.99999 with
+/// flexing orbits (4 sources, one month). The rigid-adiabatic form ignores the change of the arms during one light
 /// time and the emitter's motion during flight (relative effects ~1e-4).</para>
 /// <para>Not thread-safe: an instance owns its scratch buffers. Use one per worker. After construction no call
 /// allocates.</para>

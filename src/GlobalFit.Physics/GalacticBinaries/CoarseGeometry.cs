@@ -16,6 +16,8 @@ internal sealed class CoarseGeometry
         // One point more than the grid: the sample at t0 + T closes the trapezoid rule (see the generator).
         ArmUnit = new Vector3D[3 * (length + 1)];
         MidpointLightSeconds = new Vector3D[3 * (length + 1)];
+        ArmLightSeconds = new double[3 * (length + 1)];
+        EqualArms = true;
         for (int n = 0; n <= length; n++)
         {
             double t = startSeconds + n * durationSeconds / length;
@@ -25,8 +27,21 @@ internal sealed class CoarseGeometry
             Set(n, 0, p1, p2);
             Set(n, 1, p2, p3);
             Set(n, 2, p3, p1);
+            // One delay per arm, the mean of its two senses: they differ by ~vL/c² ~ 1e-3 s (Sagnac and point-ahead),
+            // a phase of 2e-5 rad at 20 mHz.
+            ArmLightSeconds[3 * n] = 0.5 * (orbits.LightTimeSeconds(1, 2, t) + orbits.LightTimeSeconds(2, 1, t));
+            ArmLightSeconds[3 * n + 1] = 0.5 * (orbits.LightTimeSeconds(2, 3, t) + orbits.LightTimeSeconds(3, 2, t));
+            ArmLightSeconds[3 * n + 2] = 0.5 * (orbits.LightTimeSeconds(3, 1, t) + orbits.LightTimeSeconds(1, 3, t));
+            for (int arm = 0; arm < 3; arm++)
+                EqualArms &= ArmLightSeconds[3 * n + arm] == ArmLightSeconds[0];
         }
     }
+
+    /// <summary>Index <c>3n + a</c>: light travel time along arm a at coarse time n.</summary>
+    public double[] ArmLightSeconds { get; }
+
+    /// <summary>True when every arm has the same constant light time (rigid orbits), so one delay serves all.</summary>
+    public bool EqualArms { get; }
 
     public int Length { get; }
 

@@ -13,14 +13,19 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// times <c>t_n = t0 + nT/N</c> (N from <see cref="EnvelopeLengthRule"/>) with the rigid-adiabatic link formula of
 /// §C.1 (arm direction, midpoint and frequency taken at t_n):
 /// <c>g_ij = −i (x/2)(n·H·n) sinc[(x/2)(1 − k·n)] exp(i[Φ(t) − 2πf_q(t − t0) − 2πf k·x_mid/c − x/2])</c>,
-/// <c>x = f(t)/f*</c>; the first-generation Michelson combinations act on the envelopes with the delay
-/// <c>D = e^{−ix}</c> (§F.2 step 6); A, E, T follow (§C.3); an N-point FFT scaled by <c>T/(2N)</c> gives the
-/// full-resolution bins <c>q − N/2 … q + N/2 − 1</c> in the continuous-transform convention of
-/// <see cref="FourierTransform"/> (step 8). The arm directions and midpoints at the coarse times do not depend on the
-/// source and are computed once, for every envelope length the rule can choose, when the generator is built.</para>
-/// <para>Accuracy against <see cref="SlowReferenceResponse"/> (exact links, exact delays, full cadence) is measured by
-/// the tests in tests/GlobalFit.Physics.Tests/GalacticBinaries (match ≥ 0.999 from 0.1 to 20 mHz for one month and
-/// one year of data with the default rule). The rigid-adiabatic form ignores the change of the arms during one light
+/// <c>x = 2π f(t) τ_a</c> with τ_a the light time of the link's arm; the first-generation Michelson combinations act on
+/// the envelopes with one delay <c>D_a = e^{−ix_a}</c> per arm (§F.2 step 6; equal arms for rigid orbits, flexing ones
+/// for <see cref="EccentricOrbits"/>, which matters for T at low frequency); A, E, T follow (§C.3); an N-point FFT
+/// scaled by <c>T/(2N)</c> gives the full-resolution bins <c>q − N/2 … q + N/2 − 1</c> in the continuous-transform
+/// convention of <see cref="FourierTransform"/> (step 8). Our addition to step 8 is an end correction (the ramp
+/// between the envelope's values at t0 and t0 + T is taken out before the FFT and its exact transform added back; see
+/// <c>ToBins</c>): without it the FFT is only first-order accurate for envelopes that are not periodic over the record,
+/// which is every source off a bin centre. Arm directions, midpoints and light times at the coarse times do not depend
+/// on the source and are computed once, for every envelope length the rule can choose, when the generator is built.</para>
+/// <para>Accuracy against <see cref="SlowReferenceResponse"/> (exact links, exact delays, full cadence), measured by
+/// tests/GlobalFit.Physics.Tests/GalacticBinaries on the template's bins with A/E/T noise weighting: worst overlap
+/// 0.99933 over one month (46 seeded sources, 0.1–20 mHz, rigid orbits), 0.99989 over one year (8 sources), 0.99999 with
+/// flexing orbits (4 sources, one month). The rigid-adiabatic form ignores the change of the arms during one light
 /// time and the emitter's motion during flight (relative effects ~1e-4).</para>
 /// <para>Not thread-safe: an instance owns its scratch buffers. Use one per worker. After construction no call
 /// allocates.</para>
@@ -33,7 +38,6 @@ public sealed class GalacticBinaryTemplateGenerator
 
     private readonly CoarseGeometry[] _geometries;
     private readonly int _minimumLengthLog2;
-    private readonly double _transferFrequencyHz;
     private readonly Complex[] _a;
     private readonly Complex[] _e;
     private readonly Complex[] _t;
@@ -70,7 +74,6 @@ public sealed class GalacticBinaryTemplateGenerator
         CadenceSeconds = cadenceSeconds;
         DurationSeconds = SampleCount * cadenceSeconds;
         StartSeconds = startSeconds;
-        _transferFrequencyHz = TransferFrequency.Hz(Orbits.ArmLengthM);
         _minimumLengthLog2 = BitOperations.Log2((uint)LengthRule.MinimumLength);
         int count = BitOperations.Log2((uint)LengthRule.MaximumLength) - _minimumLengthLog2 + 1;
         _geometries = new CoarseGeometry[count];
@@ -273,7 +276,8 @@ public sealed class GalacticBinaryTemplateGenerator
     {
         public Complex G12, G21, G23, G32, G31, G13;
         public double Plus12, Cross12, Plus23, Cross23, Plus31, Cross31;
-        public Complex Delay, OneMinusDelaySquared;
+        public Complex Delay12, Delay23, Delay31;
+        public Complex OneMinusRoundTrip12, OneMinusRoundTrip23, OneMinusRoundTrip31;
     }
 
     private CoarseGeometry GeometryFor(int length) =>
@@ -331,17 +335,17 @@ public sealed class GalacticBinaryTemplateGenerator
         }
     }
 
-    // X = (1 − D²)[g12 + D g21 − g13 − D g31], Y and Z cyclic (§C.2 with equal arms, §F.2 step 6); the link values are
-    // the kernels times the arm's n·H·n.
+    // First-generation Michelson combinations on the envelopes (§C.2, §F.2 step 6), one delay D_a = e^{−2πifτ_a} per arm:
+    // X = (1 − D31²)(g12 + D12 g21) − (1 − D12²)(g13 + D31 g31), Y and Z by 1 → 2 → 3 → 1. With equal arms this is
+    // (1 − D²)[g12 + D g21 − g13 − D g31]. The link values are the kernels times the arm's n·H·n.
     private static (Complex X, Complex Y, Complex Z) Michelson(in LinkSample s, Complex h12, Complex h23, Complex h31)
     {
         Complex g12 = s.G12 * h12, g21 = s.G21 * h12;
         Complex g23 = s.G23 * h23, g32 = s.G32 * h23;
         Complex g31 = s.G31 * h31, g13 = s.G13 * h31;
-        Complex d = s.Delay;
-        Complex x = s.OneMinusDelaySquared * (g12 + d * g21 - g13 - d * g31);
-        Complex y = s.OneMinusDelaySquared * (g23 + d * g32 - g21 - d * g12);
-        Complex z = s.OneMinusDelaySquared * (g31 + d * g13 - g32 - d * g23);
+        Complex x = s.OneMinusRoundTrip31 * (g12 + s.Delay12 * g21) - s.OneMinusRoundTrip12 * (g13 + s.Delay31 * g31);
+        Complex y = s.OneMinusRoundTrip12 * (g23 + s.Delay23 * g32) - s.OneMinusRoundTrip23 * (g21 + s.Delay12 * g12);
+        Complex z = s.OneMinusRoundTrip23 * (g31 + s.Delay31 * g13) - s.OneMinusRoundTrip31 * (g32 + s.Delay23 * g23);
         return (x, y, z);
     }
 
@@ -361,7 +365,6 @@ public sealed class GalacticBinaryTemplateGenerator
             // 2π f_q t0 enters every sample; keep only its fractional cycles so large start times lose no precision.
             double cycles = input.CarrierBin * (owner.StartSeconds / duration);
             CarrierStartPhase = 2.0 * Math.PI * (cycles - Math.Floor(cycles));
-            InverseTransferHz = 1.0 / owner._transferFrequencyHz;
         }
 
         public double Start { get; }
@@ -371,7 +374,6 @@ public sealed class GalacticBinaryTemplateGenerator
         public double SecondDerivative { get; }
         public double OffsetHz { get; }
         public double CarrierStartPhase { get; }
-        public double InverseTransferHz { get; }
     }
 
     private static LinkSample Sample(CoarseGeometry geometry, in SourceFrame frame, in CoarseTiming timing, int n)
@@ -381,18 +383,36 @@ public sealed class GalacticBinaryTemplateGenerator
         // Φ(t) − 2π f_q (t − t0) without φ0 (φ0 lives in P and Q): 2π (f0 − f_q) t + 2π f_q t0 + π ḟ t² + (π/3) f̈ t³.
         double phase = 2.0 * Math.PI * timing.OffsetHz * t + timing.CarrierStartPhase
             + Math.PI * t * t * (timing.Derivative + timing.SecondDerivative * t / 3.0);
-        double x = frequencyHz * timing.InverseTransferHz;
-        double halfX = 0.5 * x;
         var s = new LinkSample();
-        var (sinX, cosX) = Math.SinCos(x);
-        s.Delay = new Complex(cosX, -sinX);
-        // 1 − e^{−2ix} = 2 sin²x + 2i sin x cos x.
-        s.OneMinusDelaySquared = new Complex(2.0 * sinX * sinX, 2.0 * sinX * cosX);
         int index = 3 * n;
-        Arm(geometry, frame, index, phase, frequencyHz, halfX, out s.G12, out s.G21, out s.Plus12, out s.Cross12);
-        Arm(geometry, frame, index + 1, phase, frequencyHz, halfX, out s.G23, out s.G32, out s.Plus23, out s.Cross23);
-        Arm(geometry, frame, index + 2, phase, frequencyHz, halfX, out s.G31, out s.G13, out s.Plus31, out s.Cross31);
+        var delays = geometry.ArmLightSeconds;
+        // x_a = 2π f τ_a, the phase a wave gains over arm a (x = f/f* for the nominal arm).
+        double x12 = 2.0 * Math.PI * frequencyHz * delays[index];
+        (s.Delay12, s.OneMinusRoundTrip12) = DelayFactors(x12);
+        double x23 = x12, x31 = x12;
+        if (geometry.EqualArms)
+        {
+            (s.Delay23, s.OneMinusRoundTrip23) = (s.Delay12, s.OneMinusRoundTrip12);
+            (s.Delay31, s.OneMinusRoundTrip31) = (s.Delay12, s.OneMinusRoundTrip12);
+        }
+        else
+        {
+            x23 = 2.0 * Math.PI * frequencyHz * delays[index + 1];
+            x31 = 2.0 * Math.PI * frequencyHz * delays[index + 2];
+            (s.Delay23, s.OneMinusRoundTrip23) = DelayFactors(x23);
+            (s.Delay31, s.OneMinusRoundTrip31) = DelayFactors(x31);
+        }
+        Arm(geometry, frame, index, phase, frequencyHz, 0.5 * x12, out s.G12, out s.G21, out s.Plus12, out s.Cross12);
+        Arm(geometry, frame, index + 1, phase, frequencyHz, 0.5 * x23, out s.G23, out s.G32, out s.Plus23, out s.Cross23);
+        Arm(geometry, frame, index + 2, phase, frequencyHz, 0.5 * x31, out s.G31, out s.G13, out s.Plus31, out s.Cross31);
         return s;
+    }
+
+    // D = e^{−ix} and 1 − D² = 2 sin²x + 2i sin x cos x.
+    private static (Complex Delay, Complex OneMinusRoundTrip) DelayFactors(double x)
+    {
+        var (sin, cos) = Math.SinCos(x);
+        return (new Complex(cos, -sin), new Complex(2.0 * sin * sin, 2.0 * sin * cos));
     }
 
     // Kernels of the two links along one arm (forward: received at the arm's first spacecraft), §C.1 midpoint/sinc form
@@ -430,5 +450,14 @@ public sealed class GalacticBinaryTemplateGenerator
         public Vector3D K { get; }
     }
 
-    private static double Sinc(double z) => Math.Abs(z) < 1e-4 ? 1.0 - z * z / 6.0 : Math.Sin(z) / z;
+    // Implementation note: below |z| = 0.4 (every link below ~7.6 mHz) the Taylor series to z^10 is exact to 3e-15
+    // (next term z^12/13!); six sines per coarse sample dominated the cost, and the series made the template-plus-
+    // likelihood benchmark at 3 mHz 1.3 times faster relative to the brute-force one on the same (shared) machine.
+    private static double Sinc(double z)
+    {
+        double z2 = z * z;
+        if (z2 < 0.16)
+            return 1.0 - z2 / 6.0 * (1.0 - z2 / 20.0 * (1.0 - z2 / 42.0 * (1.0 - z2 / 72.0 * (1.0 - z2 / 110.0))));
+        return Math.Sin(z) / z;
+    }
 }

@@ -62,7 +62,7 @@ public sealed class TemplateAccuracyTests(ITestOutputHelper output)
     public void Fast_template_matches_the_brute_force_response_over_one_year()
     {
         // As the one-month test, for one Julian year at 15 s (about 30 s per brute-force source), eight seeded sources
-        // over 0.1-20 mHz. Measured worst overlap: see the report (printed).
+        // over 0.1-20 mHz. Measured worst overlap 0.99989 (0.19 mHz), worst match 0.99989.
         var random = new Random(2026);
         var sources = Enumerable.Range(0, 8).Select(_ => SlowReferenceSpectra.RandomSource(random, 1e-4, 2e-2)).ToList();
         double worst = Sweep(PhysicalConstants.JulianYearS, 15.0, sources);
@@ -73,7 +73,7 @@ public sealed class TemplateAccuracyTests(ITestOutputHelper output)
     [Trait("Category", "Long")]
     public void Fast_template_matches_the_brute_force_response_for_many_one_month_sources()
     {
-        // Forty seeded sources over 0.1-20 mHz, one month at 20 s.
+        // Forty seeded sources over 0.1-20 mHz, one month at 20 s. Measured worst overlap 0.99933, match 0.99933.
         var random = new Random(7);
         var sources = Enumerable.Range(0, 40).Select(_ => SlowReferenceSpectra.RandomSource(random, 1e-4, 2e-2)).ToList();
         double worst = Sweep(30 * 86400.0, 20.0, sources);
@@ -87,7 +87,7 @@ public sealed class TemplateAccuracyTests(ITestOutputHelper output)
         // EccentricOrbits (sheet §B.2: arms flex by ~0.5 % over a year, light times iterated in the brute force). The
         // fast response takes arm directions and midpoints from the orbits but one nominal delay L/c; the delay error
         // shifts the TDI phase by ~x * 0.0025. One month at 20 s, four seeded sources; about ten times slower than with
-        // rigid orbits, hence Long.
+        // rigid orbits, hence Long. Measured worst overlap 0.999992.
         var random = new Random(99);
         var sources = Enumerable.Range(0, 4).Select(_ => SlowReferenceSpectra.RandomSource(random, 1e-4, 2e-2)).ToList();
         double worst = Sweep(30 * 86400.0, 20.0, sources, new EccentricOrbits(initialOrbitalPhaseRad: 0.3));

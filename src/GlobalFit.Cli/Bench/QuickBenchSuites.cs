@@ -14,5 +14,6 @@ public static class QuickBenchSuites
         new("inner product and FFT", SeriesBench.Run),
         new("noise synthesis", NoiseBench.Run),
         new("sampler overhead", SamplerBench.Run),
+        new("galactic-binary template", GalacticBinaryBench.Run),
     ];
 }

@@ -2,7 +2,6 @@ using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Noise;
-using GlobalFit.Physics.Series;
 
 namespace GlobalFit.Engine.Inspection;
 
@@ -54,7 +53,7 @@ public sealed record ObservationInspection(
         if (observation.Provenance.Entries.TryGetValue(ObservationSimulator.ScenarioProvenanceKey, out var toml))
         {
             var scenario = SimulationScenario.FromConfig(ConfigDocument.Parse(toml, $"{path} (provenance {ObservationSimulator.ScenarioProvenanceKey})"));
-            return (ObservationSimulator.NoiseModel(scenario.Noise), $"noise model of the file's scenario \"{scenario.Name}\"");
+            return (scenario.Noise.Model(), $"noise model of the file's scenario \"{scenario.Name}\"");
         }
         return (new AetNoiseModel(InstrumentNoiseSettings.Default), "default instrument noise (the file records no scenario)");
     }

@@ -23,7 +23,7 @@ public static class ObservationSimulator
     /// <param name="progress">Receives the completed fraction; may be null.</param>
     public static Observation Simulate(SimulationScenario scenario, string generator, IReadOnlyDictionary<string, string> notes, IProgress<double>? progress)
     {
-        var noise = NoiseModel(scenario.Noise);
+        var noise = scenario.Noise.Model();
         int n = scenario.Observation.SampleCount;
         double dt = scenario.Observation.CadenceS;
         int normalCount = NoiseSynthesis.RequiredNormalCount(n);
@@ -73,15 +73,5 @@ public static class ObservationSimulator
             for (int i = 0; i < samples.Length; i++) samples[i] += signal[i];
         }
         return truth;
-    }
-
-    /// <summary>The A/E/T noise model a scenario's noise settings describe.</summary>
-    public static AetNoiseModel NoiseModel(NoiseSettings settings)
-    {
-        var instrument = new InstrumentNoiseSettings(settings.AccelerationAsd, settings.OmsAsd, settings.ArmLengthM);
-        GalacticConfusionSettings? foreground = settings.ForegroundEnabled && settings.ForegroundAmplitude > 0
-            ? new GalacticConfusionSettings(settings.ForegroundFitYears, settings.ForegroundAmplitude)
-            : null;
-        return new AetNoiseModel(instrument, foreground);
     }
 }

@@ -1,5 +1,6 @@
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Physics.Constants;
+using GlobalFit.Physics.Noise;
 
 namespace GlobalFit.Engine.Simulation;
 
@@ -19,7 +20,7 @@ public sealed record SimulationScenario(string Name, ulong Seed, ObservationSett
         string name = root.GetString("name", "unnamed scenario");
         long seed = root.GetInteger("seed", 1, 0, long.MaxValue);
         var observation = ObservationSettings.FromConfig(root.GetTable("observation") ?? throw root.InvalidTable("the [observation] table is required"));
-        var noise = NoiseSettings.FromConfig(root.GetTable("noise"), root);
+        var noise = NoiseSettings.FromConfig(root.GetTable("noise"));
         var sources = new List<ISourceInjection>();
         foreach (var sourceClass in SimulatedSourceClasses.All)
             if (root.GetTable(sourceClass.ClassId) is { } section)
@@ -40,14 +41,14 @@ public sealed record SimulationScenario(string Name, ulong Seed, ObservationSett
         start_s = {TomlText.Number(Observation.StartS)}
 
         [noise]
-        acceleration_asd = {TomlText.Number(Noise.AccelerationAsd)}
-        oms_asd = {TomlText.Number(Noise.OmsAsd)}
-        arm_length_m = {TomlText.Number(Noise.ArmLengthM)}
+        acceleration_asd = {TomlText.Number(Noise.Instrument.AccelerationAsd)}
+        oms_asd = {TomlText.Number(Noise.Instrument.OmsAsd)}
+        arm_length_m = {TomlText.Number(Noise.Instrument.ArmLengthM)}
 
         [noise.foreground]
-        enabled = {(Noise.ForegroundEnabled ? "true" : "false")}
-        fit_years = {TomlText.Number(Noise.ForegroundFitYears)}
-        amplitude = {TomlText.Number(Noise.ForegroundAmplitude)}
+        enabled = {(Noise.Foreground is null ? "false" : "true")}
+        fit_years = {TomlText.Number(Noise.Foreground?.ObservationYears ?? 1.0)}
+        amplitude = {TomlText.Number(Noise.Foreground?.AmplitudeScale ?? 1.0)}
 
         """ + string.Concat(Sources.Select(s => "\n" + s.ToToml()));
 }
@@ -85,41 +86,37 @@ public sealed record ObservationSettings(double DurationS, double CadenceS, doub
     }
 }
 
-/// <summary>Instrument noise levels and the optional galactic confusion foreground.</summary>
-/// <param name="AccelerationAsd">Test-mass acceleration noise at its flat level, m s^-2 Hz^-1/2.</param>
-/// <param name="OmsAsd">Optical-metrology displacement noise at its flat level, m Hz^-1/2.</param>
-/// <param name="ArmLengthM">Arm length, m.</param>
-/// <param name="ForegroundEnabled">Whether the confusion foreground is added.</param>
-/// <param name="ForegroundFitYears">Observation time of the published foreground fit to use (0.5, 1, 2 or 4 yr).</param>
-/// <param name="ForegroundAmplitude">Multiplier of the published foreground PSD (1 = as published).</param>
-public sealed record NoiseSettings(double AccelerationAsd, double OmsAsd, double ArmLengthM, bool ForegroundEnabled, double ForegroundFitYears, double ForegroundAmplitude)
+/// <summary>Instrument noise levels and the optional galactic confusion foreground of a scenario.</summary>
+/// <param name="Instrument">Acceleration and optical-metrology levels and the arm length.</param>
+/// <param name="Foreground">The confusion foreground (published fit and amplitude), or null for none.</param>
+public sealed record NoiseSettings(InstrumentNoiseSettings Instrument, GalacticConfusionSettings? Foreground)
 {
-    /// <summary>Default levels: 3e-15 m s^-2 Hz^-1/2, 15e-12 m Hz^-1/2, 2.5e9 m arms (reference sheet §D.1), foreground on with the 1-yr fit.</summary>
-    public static NoiseSettings Default { get; } = new(3e-15, 15e-12, 2.5e9, true, 1.0, 1.0);
+    /// <summary>Default levels (reference sheet §D.1) with the foreground fitted for one year.</summary>
+    public static NoiseSettings Default { get; } = new(InstrumentNoiseSettings.Default, new GalacticConfusionSettings(1.0));
+
+    /// <summary>The A/E/T noise model these settings describe.</summary>
+    public AetNoiseModel Model() => new(Instrument, Foreground);
 
     /// <summary>Reads <c>[noise]</c> and <c>[noise.foreground]</c>; a missing table means the defaults.</summary>
-    public static NoiseSettings FromConfig(ConfigTable? table, ConfigTable root)
+    public static NoiseSettings FromConfig(ConfigTable? table)
     {
         if (table is null) return Default;
-        var d = Default;
+        var d = InstrumentNoiseSettings.Default;
         double acc = table.GetPositive("acceleration_asd", d.AccelerationAsd);
         double oms = table.GetPositive("oms_asd", d.OmsAsd);
         double arm = table.GetPositive("arm_length_m", d.ArmLengthM);
-        bool enabled = d.ForegroundEnabled;
-        double years = d.ForegroundFitYears, amplitude = d.ForegroundAmplitude;
-        if (table.GetTable("foreground") is { } foreground)
+        var foreground = Default.Foreground;
+        if (table.GetTable("foreground") is { } f)
         {
-            enabled = foreground.GetBool("enabled", enabled);
-            years = foreground.GetDouble("fit_years", years);
-            if (Array.IndexOf(ForegroundFitYearsAllowed, years) < 0)
-                throw foreground.Invalid("fit_years", $"the published foreground fit exists for 0.5, 1, 2 and 4 years only, got {years}");
-            amplitude = foreground.GetNonNegative("amplitude", amplitude);
-            foreground.RejectUnknownKeys(["enabled", "fit_years", "amplitude"]);
+            bool enabled = f.GetBool("enabled", true);
+            double years = f.GetDouble("fit_years", 1.0);
+            if (!GalacticConfusionSettings.SupportedObservationYears.Contains(years))
+                throw f.Invalid("fit_years", $"the published foreground fit exists for 0.5, 1, 2 and 4 years only, got {years}");
+            double amplitude = f.GetNonNegative("amplitude", 1.0);
+            f.RejectUnknownKeys(["enabled", "fit_years", "amplitude"]);
+            foreground = enabled && amplitude > 0 ? new GalacticConfusionSettings(years, amplitude) : null;
         }
         table.RejectUnknownKeys(["acceleration_asd", "oms_asd", "arm_length_m", "foreground"]);
-        return new NoiseSettings(acc, oms, arm, enabled, years, amplitude);
+        return new NoiseSettings(new InstrumentNoiseSettings(acc, oms, arm), foreground);
     }
-
-    /// <summary>Observation times (years) for which the foreground fit of Robson, Cornish &amp; Liu 2019 is tabulated.</summary>
-    public static readonly double[] ForegroundFitYearsAllowed = [0.5, 1.0, 2.0, 4.0];
 }

@@ -70,7 +70,7 @@ public class GalacticBinarySimulationTests
         var truth = observation.Truth[0];
         double snr = truth[0, "snr"];
         var generator = new GalacticBinaryTemplateGenerator(observation.Data.Count * 10.0, 10.0);
-        var noise = ObservationSimulator.NoiseModel(Parse(Observation).Noise);
+        var noise = Parse(Observation).Noise.Model();
         var source = new GalacticBinaryParameters(3.1e-3, 1e-16, 2e-22, 0.4, 2.0, 0.7, 0.3, 1.1);
         Assert.Equal(GalacticBinarySnr.Optimal(generator, source, noise), snr, 1e-12 * snr);
         Assert.True(snr > 5, $"a 2e-22 binary at 3 mHz over 8 days should be loud, got SNR {snr}");

@@ -10,8 +10,10 @@ namespace GlobalFit.Inference.Proposals;
 /// Evolution", Statistics and Computing 16, 239: γ = 2.38/√(2d), and γ = 1 with probability 0.1 so that
 /// the chain can jump between modes. ter Braak &amp; Vrugt (2008), "Differential Evolution Markov Chain with
 /// snooker updater and fewer chains", Statistics and Computing 18, 435 (DE-MC_Z): the pair (z_a, z_b) is
-/// drawn from an archive of past states initialised with prior draws, and a small jitter e ~ N(0, b²)
-/// keeps the chain irreducible; here b is 10⁻⁶ of each parameter's range (10⁻⁶ for infinite ranges).</para>
+/// drawn from an archive of past states initialised with prior draws, and a small symmetric jitter e keeps
+/// the chain irreducible. They use e ~ N(0, b²); here e ~ U(−b, b), which serves the same purpose and costs a
+/// uniform instead of a Gaussian variate (the Gaussians were 40 % of this proposal's time); b is 10⁻⁶ of
+/// each parameter's range (10⁻⁶ for infinite ranges).</para>
 /// <para>The difference vector is symmetric in distribution and independent of x, so the log ratio is zero.
 /// One state is offered to the archive every <see cref="RecordInterval"/> observations; the archive starts
 /// with <see cref="InitialHistory"/> prior draws.</para>
@@ -83,7 +85,7 @@ public sealed class DifferentialEvolutionProposal : IAdaptiveProposal, IStateful
         ReadOnlySpan<double> zb = _history.AsSpan(b * _dimension, _dimension);
         for (int i = 0; i < _dimension; i++)
         {
-            candidate[i] = current[i] + gamma * (za[i] - zb[i]) + _jitter[i] * random.NextGaussian();
+            candidate[i] = current[i] + gamma * (za[i] - zb[i]) + _jitter[i] * (2.0 * random.NextDouble() - 1.0);
         }
 
         return 0.0;

@@ -52,16 +52,20 @@ internal static class SmallDenseMatrix
     /// <summary>Writes y = L x for lower-triangular L (n×n).</summary>
     public static void LowerTimesVector(ReadOnlySpan<double> lower, int n, ReadOnlySpan<double> x, Span<double> y)
     {
-        for (int i = 0; i < n; i++)
+        // Unchecked: indices are bounded by n², and this runs once per proposal.
+        unchecked
         {
-            double sum = 0.0;
-            ReadOnlySpan<double> row = lower.Slice(i * n, i + 1);
-            for (int k = 0; k <= i; k++)
+            for (int i = 0; i < n; i++)
             {
-                sum += row[k] * x[k];
-            }
+                ReadOnlySpan<double> row = lower.Slice(i * n, i + 1);
+                double sum = 0.0;
+                for (int k = 0; k < row.Length; k++)
+                {
+                    sum += row[k] * x[k];
+                }
 
-            y[i] = sum;
+                y[i] = sum;
+            }
         }
     }
 

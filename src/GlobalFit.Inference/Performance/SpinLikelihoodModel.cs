@@ -51,6 +51,9 @@ public sealed class SpinLikelihoodModel : ITargetModel
     }
 
     /// <inheritdoc />
+    /// <remarks>Compiled fully optimised from the first call, so that its cost does not change when tiered
+    /// compilation promotes it in the middle of a calibration.</remarks>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)]
     public double LogLikelihood(ReadOnlySpan<double> theta)
     {
         double sumOfSquares = 0.0;

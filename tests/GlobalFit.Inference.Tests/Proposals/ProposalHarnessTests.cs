@@ -83,8 +83,8 @@ public sealed class ProposalHarnessTests
     [Fact]
     public void Class_supplied_asymmetric_proposal_with_its_log_ratio_samples_an_exponential()
     {
-        // Source: Exp(1) has mean 1 and E[(x − 1)²] = 1. Ignoring the ln x′ − ln x ratio would sample
-        // x·e^(−x) instead (mean 2), far outside the bound. Bounds as in the class remarks.
+        // Source: Exp(1) has mean 1 and E[(x − 1)²] = 1. Ignoring the ln x′ − ln x ratio would target
+        // e^(−x)/x instead (see the negative control below). Bounds as in the class remarks.
         var sampler = new ParallelTemperingSampler<ExponentialModel>(new ExponentialModel(), new ParallelTemperingSettings
         {
             Proposals = [new ProposalSpec("log-normal-step", 1.0, _ => new LogNormalStepProposal(0.8))],
@@ -95,6 +95,24 @@ public sealed class ProposalHarnessTests
         sampler.Advance(30_000, sink);
         MonteCarloBounds.AssertMeanWithin(sink.Chains(0), 1.0, Sigmas, "log-normal step mean");
         MonteCarloBounds.AssertMeanWithin(sink.Chains((r, n) => Math.Pow(sink.Draws[r][0][n] - 1.0, 2)), 1.0, Sigmas, "log-normal step variance");
+    }
+
+    [Fact]
+    public void Harness_detects_a_proposal_that_omits_its_log_ratio()
+    {
+        // Negative control: the same multiplicative walk reporting a zero ratio is in detailed balance with
+        // e^(−x)/x instead of e^(−x) (not even normalisable: the chain drifts towards 0), so its mean must lie far
+        // outside the 4.5σ band around 1 that the correct proposal passes.
+        var sampler = new ParallelTemperingSampler<ExponentialModel>(new ExponentialModel(), new ParallelTemperingSettings
+        {
+            Proposals = [new ProposalSpec("wrong-ratio", 1.0, _ => new ZeroRatioLogNormalStep(0.8))],
+            Tempering = new TemperingSettings { ChainsPerTemperature = 4 },
+            Seed = 105,
+        });
+        var sink = new CollectingSink(4, 1, 1_000);
+        sampler.Advance(30_000, sink);
+        double[][] chains = sink.Chains(0);
+        Assert.True(Math.Abs(MonteCarloBounds.Mean(chains) - 1.0) > 10 * MonteCarloBounds.StandardError(chains));
     }
 
     [Fact]
@@ -172,6 +190,15 @@ public sealed class ProposalHarnessTests
             {
                 template[k] = A[k, 0] * theta[0] + A[k, 1] * theta[1];
             }
+        }
+    }
+
+    private sealed class ZeroRatioLogNormalStep(double scale) : IProposal
+    {
+        public double Propose(ReadOnlySpan<double> current, Span<double> candidate, ref RandomStream random)
+        {
+            candidate[0] = current[0] * Math.Exp(scale * random.NextGaussian());
+            return 0.0;
         }
     }
 

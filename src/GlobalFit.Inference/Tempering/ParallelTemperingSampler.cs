@@ -24,7 +24,7 @@ namespace GlobalFit.Inference.Tempering;
 /// <para>Steady-state steps allocate nothing. Not thread-safe: call from one thread at a time.</para>
 /// </remarks>
 /// <typeparam name="TModel">The model; a struct or sealed class gets a devirtualised loop.</typeparam>
-public sealed class ParallelTemperingSampler<TModel>
+public sealed class ParallelTemperingSampler<TModel> : IChainExchange
     where TModel : ITargetModel
 {
     private const int MaximumInitialDraws = 10_000;
@@ -212,17 +212,7 @@ public sealed class ParallelTemperingSampler<TModel>
         var proposals = ImmutableArray.CreateBuilder<ProposalAcceptance>();
         for (int rung = 0; rung < _ladder.Count; rung++)
         {
-            for (int j = 0; j < _settings.Proposals.Length; j++)
-            {
-                long proposed = 0, accepted = 0;
-                for (int r = 0; r < _replicas; r++)
-                {
-                    proposed += _mixtures[rung * _replicas + r].Proposed[j];
-                    accepted += _mixtures[rung * _replicas + r].Accepted[j];
-                }
-
-                proposals.Add(new ProposalAcceptance(_settings.Proposals[j].Name, rung, proposed, accepted));
-            }
+            ReplicaExchange.AddProposalAcceptance(proposals, rung, _replicas, _mixtures, _settings.Proposals);
         }
 
         return new SamplerStatistics(
@@ -340,34 +330,11 @@ public sealed class ParallelTemperingSampler<TModel>
         mixture.Observe(current);
     }
 
-    private void SwapRound()
-    {
-        ReadOnlySpan<double> betas = _ladder.InverseTemperatures;
-        Array.Clear(_acceptedPerPair);
-        for (int rung = _ladder.Count - 2; rung >= 0; rung--)
-        {
-            double deltaBeta = betas[rung] - betas[rung + 1];
-            for (int r = 0; r < _replicas; r++)
-            {
-                int cold = rung * _replicas + r;
-                int hot = cold + _replicas;
-                double logAcceptance = deltaBeta * (_logLikelihoods[hot] - _logLikelihoods[cold]);
-                if (MetropolisTest.Accepts(logAcceptance, ref _swapRandom))
-                {
-                    Exchange(cold, hot);
-                    _acceptedPerPair[rung]++;
-                }
-            }
-        }
+    private void SwapRound() =>
+        ReplicaExchange.Round(_ladder, _logLikelihoods, _replicas, ref _swapRandom, _acceptedPerPair, _temperatures, this);
 
-        _ladder.RecordRound(_acceptedPerPair, _replicas);
-        for (int c = 0; c < _chainCount; c++)
-        {
-            _temperatures[c].InverseTemperature = _ladder.InverseTemperatures[c / _replicas];
-        }
-    }
-
-    private void Exchange(int first, int second)
+    /// <inheritdoc/>
+    void IChainExchange.Exchange(int first, int second)
     {
         Span<double> a = _positions.AsSpan(first * _dimension, _dimension);
         Span<double> b = _positions.AsSpan(second * _dimension, _dimension);

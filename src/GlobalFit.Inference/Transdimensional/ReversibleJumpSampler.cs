@@ -32,7 +32,7 @@ namespace GlobalFit.Inference.Transdimensional;
 /// <para>Steady-state steps allocate nothing. Not thread-safe.</para>
 /// </remarks>
 /// <typeparam name="TModel">The model; a struct or sealed class gets a devirtualised loop.</typeparam>
-public sealed class ReversibleJumpSampler<TModel>
+public sealed class ReversibleJumpSampler<TModel> : IChainExchange
     where TModel : ITransdimensionalModel
 {
     private const int BirthsProposed = 0;
@@ -215,17 +215,7 @@ public sealed class ReversibleJumpSampler<TModel>
         var proposals = ImmutableArray.CreateBuilder<ProposalAcceptance>();
         for (int rung = 0; rung < _ladder.Count; rung++)
         {
-            for (int j = 0; j < _settings.WithinProposals.Length; j++)
-            {
-                long proposed = 0, accepted = 0;
-                for (int r = 0; r < _replicas; r++)
-                {
-                    proposed += _mixtures[rung * _replicas + r].Proposed[j];
-                    accepted += _mixtures[rung * _replicas + r].Accepted[j];
-                }
-
-                proposals.Add(new ProposalAcceptance(_settings.WithinProposals[j].Name, rung, proposed, accepted));
-            }
+            ReplicaExchange.AddProposalAcceptance(proposals, rung, _replicas, _mixtures, _settings.WithinProposals);
 
             long births = 0, birthsAccepted = 0, deaths = 0, deathsAccepted = 0;
             for (int r = 0; r < _replicas; r++)
@@ -463,33 +453,16 @@ public sealed class ReversibleJumpSampler<TModel>
         }
     }
 
-    private void SwapRound()
-    {
-        ReadOnlySpan<double> betas = _ladder.InverseTemperatures;
-        Array.Clear(_acceptedPerPair);
-        for (int rung = _ladder.Count - 2; rung >= 0; rung--)
-        {
-            double deltaBeta = betas[rung] - betas[rung + 1];
-            for (int r = 0; r < _replicas; r++)
-            {
-                int cold = rung * _replicas + r;
-                int hot = cold + _replicas;
-                if (MetropolisTest.Accepts(deltaBeta * (_logLikelihoods[hot] - _logLikelihoods[cold]), ref _swapRandom))
-                {
-                    (_sources[cold], _sources[hot]) = (_sources[hot], _sources[cold]);
-                    (_counts[cold], _counts[hot]) = (_counts[hot], _counts[cold]);
-                    (_logLikelihoods[cold], _logLikelihoods[hot]) = (_logLikelihoods[hot], _logLikelihoods[cold]);
-                    (_logPriors[cold], _logPriors[hot]) = (_logPriors[hot], _logPriors[cold]);
-                    _acceptedPerPair[rung]++;
-                }
-            }
-        }
+    private void SwapRound() =>
+        ReplicaExchange.Round(_ladder, _logLikelihoods, _replicas, ref _swapRandom, _acceptedPerPair, _temperatures, this);
 
-        _ladder.RecordRound(_acceptedPerPair, _replicas);
-        for (int c = 0; c < _chainCount; c++)
-        {
-            _temperatures[c].InverseTemperature = _ladder.InverseTemperatures[c / _replicas];
-        }
+    /// <inheritdoc/>
+    void IChainExchange.Exchange(int first, int second)
+    {
+        (_sources[first], _sources[second]) = (_sources[second], _sources[first]);
+        (_counts[first], _counts[second]) = (_counts[second], _counts[first]);
+        (_logLikelihoods[first], _logLikelihoods[second]) = (_logLikelihoods[second], _logLikelihoods[first]);
+        (_logPriors[first], _logPriors[second]) = (_logPriors[second], _logPriors[first]);
     }
 
     private readonly struct NoSampleSink : ITransdimensionalSampleSink

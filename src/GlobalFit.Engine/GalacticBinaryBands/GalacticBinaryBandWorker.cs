@@ -18,9 +18,12 @@ namespace GlobalFit.Engine.GalacticBinaryBands;
 /// it rebuilds the likelihood (<see cref="GalacticBinaryBandModel"/>), the birth density from the F-statistic of that
 /// residual (<see cref="GalacticBinaryBirthDensity"/>) and the Fisher proposal, re-scores every chain's configuration
 /// against the new residual, and continues the sampler from its saved state for the requested number of steps. Moves:
-/// birth and death (probability <c>jump_probability</c>), otherwise one source moved by Fisher-eigen jumps (weight
-/// 0.55), differential evolution (0.2), adaptive Gaussian (0.15) or the antipodal sky reflection (0.1). The prior is
+/// birth and death (probability <c>jump_probability</c>), otherwise one source moved by a Gaussian from that source's own Fisher matrix
+/// (<see cref="LocalFisherGaussianProposal"/>, weight 0.45), Fisher-eigen jumps of the Inference library (0.15),
+/// differential evolution (0.15), adaptive Gaussian (0.15) or the antipodal sky reflection (0.1). The prior is
 /// <see cref="GalacticBinarySourcePrior"/> with a uniform count prior on 0 … <c>max_sources_per_window</c>.</para>
+/// <para>A new worker's chains start from the sources of <see cref="GreedyFStatisticSearch"/> on its first residual
+/// rather than empty, which keeps loud sources from being fitted as a patchwork of partial sources.</para>
 /// <para>The SNR scale of the amplitude prior is fixed at the first update, from that update's inverse PSDs, and kept in
 /// the state. The whole state (sampler chains, random streams, proposal adaptation, counters) is one MessagePack blob;
 /// a worker restored from it and given the same residual and step count produces the same result bit for bit (only
@@ -112,28 +115,26 @@ public sealed class GalacticBinaryBandWorker
         int chains = _settings.TemperatureCount * _settings.ChainsPerTemperature;
         var model = new GalacticBinaryBandModel(_generator, _prior, residual, snrScale, _settings.MaxSourcesPerWindow,
             4 * chains * _settings.MaxSourcesPerWindow + 256);
-        var grid = FStatisticGrid.ForWindow(Window.SourceRange, Window.DfHz, _settings.FStatisticCellsPerBin,
+        // Births and the starting search cover the core only: a source enters a drift margin only by moving there, and is
+        // handed to the neighbour that owns it; were births allowed in the margins, two windows would fit the same signal.
+        var grid = FStatisticGrid.ForWindow(Window.Core, Window.DfHz, _settings.FStatisticCellsPerBin,
             _settings.MinFrequencyDerivativeHzS, _settings.MaxFrequencyDerivativeHzS, 1,
             _settings.FStatisticLatitudeCells, _settings.FStatisticLongitudeCells);
         var map = new FStatisticCellDensity(FStatisticMap.Compute(_statistic, residual, grid), MapUniformFraction);
         var birth = new GalacticBinaryBirthDensity(_statistic, residual, map, snrScale);
         var fisher = new GalacticBinarySourceFisher(_generator, residual, snrScale, _prior.Schema);
         var samplerSettings = SamplerSettings(fisher);
-        var sampler = _state.Sampler is null
-            ? new ReversibleJumpSampler<GalacticBinaryBandModel>(model, birth, samplerSettings)
-            : ReversibleJumpSampler<GalacticBinaryBandModel>.Resume(model, birth, samplerSettings, Rescored(_state.Sampler, model));
+        var start = _state.Sampler ?? Seeded(new ReversibleJumpSampler<GalacticBinaryBandModel>(model, birth, samplerSettings).CaptureState(),
+            GreedyFStatisticSearch.Run(_statistic, residual, grid, _settings.MaxSourcesPerWindow), snrScale);
+        var sampler = ReversibleJumpSampler<GalacticBinaryBandModel>.Resume(model, birth, samplerSettings, Rescored(start, model));
         var collector = new SampleCollector(_settings.SampleInterval, snrScale);
         sampler.Advance(steps, collector);
         var captured = sampler.CaptureState();
-        var templateA = new Complex[Window.Padded.Count];
-        var templateE = new Complex[Window.Padded.Count];
-        var templateT = _settings.IncludeT ? new Complex[Window.Padded.Count] : null;
-        model.AddTemplates(sampler.Sources(0), sampler.SourceCount(0), templateA, templateE, templateT);
         _state = _state with { SnrScale = snrScale, Updates = _state.Updates + 1, Sampler = captured };
         clock.Stop();
         var statistics = new GalacticBinaryBandStatistics(steps, sampler.Step, sampler.SourceCount(0), sampler.LogLikelihood(0),
             clock.Elapsed, sampler.GetStatistics());
-        return new GalacticBinaryBandUpdate(Window.Index, Window.Padded, templateA, templateE, templateT, collector.Samples.ToImmutable(), statistics);
+        return new GalacticBinaryBandUpdate(Window.Index, CurrentTemplate(), collector.Samples.ToImmutable(), statistics);
     }
 
     /// <summary>The sources of the first cold chain now.</summary>
@@ -141,6 +142,17 @@ public sealed class GalacticBinaryBandWorker
     {
         if (_state.Sampler is null) return [];
         return ToParameters(_state.Sampler.Sources[0], _state.Sampler.SourceCounts[0], _state.SnrScale);
+    }
+
+    /// <summary>The summed templates of the first cold chain's sources now (all zero before the first update). Call it
+    /// again after <see cref="TakeDriftedSources"/> or <see cref="Adopt"/>, which change the sources.</summary>
+    public GalacticBinaryWindowTemplate CurrentTemplate()
+    {
+        var a = new Complex[Window.Padded.Count];
+        var e = new Complex[Window.Padded.Count];
+        var t = _settings.IncludeT ? new Complex[Window.Padded.Count] : null;
+        foreach (var source in CurrentSources()) _generator.AddResponse(source, Window.Padded, a, e, t);
+        return new GalacticBinaryWindowTemplate(Window.Padded, a, e, t);
     }
 
     /// <summary>Removes from every chain the sources whose f0 has left the core (into a drift margin) and returns them,
@@ -216,8 +228,9 @@ public sealed class GalacticBinaryBandWorker
         },
         WithinProposals =
         [
-            ProposalSpec.FisherEigen(0.55, fisher, _settings.FisherRefreshSteps),
-            ProposalSpec.DifferentialEvolution(0.2),
+            LocalFisherGaussianProposal.Spec(0.45, fisher),
+            ProposalSpec.FisherEigen(0.15, fisher, _settings.FisherRefreshSteps),
+            ProposalSpec.DifferentialEvolution(0.15),
             ProposalSpec.AdaptiveGaussian(0.15),
             AntipodalSkyProposal.Spec(0.1),
         ],
@@ -226,6 +239,26 @@ public sealed class GalacticBinaryBandWorker
         Seed = _state.Seed,
         StreamId = (ulong)Window.Index,
     };
+
+    // Every chain of a new worker starts from the sources of the greedy search that lie in the prior.
+    private ReversibleJumpState Seeded(ReversibleJumpState empty, List<GalacticBinaryParameters> found, double snrScale)
+    {
+        const int d = GalacticBinarySourceVector.Dimension;
+        Span<double> values = stackalloc double[d];
+        for (int c = 0; c < empty.SourceCounts.Length; c++)
+        {
+            int count = 0;
+            foreach (var source in found)
+            {
+                GalacticBinarySourceVector.FromParameters(source, snrScale, values);
+                if (!(_prior.LogPrior(values) > double.NegativeInfinity)) continue;
+                values.CopyTo(empty.Sources[c].AsSpan(count * d, d));
+                count++;
+            }
+            empty.SourceCounts[c] = count;
+        }
+        return empty;
+    }
 
     // The residual changed since the state was saved (other windows moved), so every chain's ln L and ln prior are
     // recomputed before the sampler continues; sources handed over by TakeDriftedSources/Adopt are scored here too.

@@ -35,7 +35,9 @@ public sealed class GalacticBinaryBirthDensity : IBirthDensity
     /// <summary>Creates the density.</summary>
     /// <param name="statistic">The worker's F-statistic.</param>
     /// <param name="band">The residual.</param>
-    /// <param name="map">The intrinsic-parameter density, on a grid equal to the prior's (f0, ḟ, sin β, λ) box.</param>
+    /// <param name="map">The intrinsic-parameter density, on a grid inside the prior's (f0, ḟ, sin β, λ) box (the worker
+    /// uses the core: a source in a drift margin can then be neither born nor killed there, a consistent pair of zero
+    /// probabilities, and leaves by the hand-off instead).</param>
     /// <param name="snrScale">s of the window.</param>
     public GalacticBinaryBirthDensity(FStatistic statistic, GalacticBinaryBand band, FStatisticCellDensity map, double snrScale)
     {

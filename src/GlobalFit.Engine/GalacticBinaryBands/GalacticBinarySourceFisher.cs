@@ -9,7 +9,8 @@ namespace GlobalFit.Engine.GalacticBinaryBands;
 /// templates over the window: <c>F_ij = (∂_i h | ∂_j h)</c>.</summary>
 /// <remarks>The standard high-SNR approximation of the inverse posterior covariance (Cutler &amp; Flanagan 1994, PRD 49,
 /// 2658, cited from memory; Cornish &amp; Crowder 2005, PRD 72, 043005, for this use as a proposal). 16 templates per
-/// matrix. Steps: 10⁻³ bins in f0, 10⁻³ of the prior width in ḟ, 10⁻⁴ relative in ρ̂ and 10⁻⁴ in the dimensionless and
+/// matrix. Steps: 10⁻³ bins in f0, 5 % of the prior width in ḟ (the phase π ḟ t² is linear in ḟ, so a large step costs no accuracy,
+/// while a small one drowns the tiny derivative of a short record in the template's round-off), 10⁻⁴ relative in ρ̂ and 10⁻⁴ in the dimensionless and
 /// angular coordinates. 1/width² of each prior range is added to the diagonal: parameters the data do not constrain
 /// (ḟ over a short record) then get steps of the prior's size instead of the near-infinite steps of a singular matrix.
 /// Not thread-safe (it shares the worker's generator and owns scratch spectra).</remarks>
@@ -36,7 +37,7 @@ public sealed class GalacticBinarySourceFisher : IFisherInformation
         _generator = generator ?? throw new ArgumentNullException(nameof(generator));
         _band = band ?? throw new ArgumentNullException(nameof(band));
         _snrScale = snrScale;
-        _derivativeStep = 1e-3 * derivativeRangeHzS;
+        _derivativeStep = 0.05 * derivativeRangeHzS;
         int channels = band.IncludesT ? 3 : 2;
         _derivatives = new Complex[GalacticBinarySourceVector.Dimension * channels][];
         for (int i = 0; i < _derivatives.Length; i++) _derivatives[i] = new Complex[band.Window.Count];

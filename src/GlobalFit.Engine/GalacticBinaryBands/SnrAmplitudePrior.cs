@@ -54,7 +54,7 @@ public sealed class SnrAmplitudePrior
     public double Quantile(double uniform)
     {
         double target = Math.Clamp(uniform, 0.0, 1.0) * UntruncatedCumulative(MaxSnr);
-        // C is monotone in ρ; bisection on [0, ρ_max] to below one ulp-scale width is plenty and branch-free of Newton failures.
+        // C is monotone in ρ, so bisection always converges (Newton can overshoot on the flat tail); 1e-12 relative suffices.
         double lower = 0.0, upper = MaxSnr;
         for (int i = 0; i < 200 && upper - lower > 1e-12 * upper; i++)
         {

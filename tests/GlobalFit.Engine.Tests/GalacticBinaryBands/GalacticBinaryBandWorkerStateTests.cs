@@ -20,8 +20,8 @@ public class GalacticBinaryBandWorkerStateTests
     // ImmutableArray's own equality compares array references, so contents are compared as plain arrays.
     private static void AssertSame(GalacticBinaryBandUpdate expected, GalacticBinaryBandUpdate actual)
     {
-        Assert.Equal(expected.TemplateA, actual.TemplateA);
-        Assert.Equal(expected.TemplateE, actual.TemplateE);
+        Assert.Equal(expected.Template.A, actual.Template.A);
+        Assert.Equal(expected.Template.E, actual.Template.E);
         Assert.Equal(expected.Samples.Length, actual.Samples.Length);
         for (int i = 0; i < expected.Samples.Length; i++)
         {
@@ -74,29 +74,35 @@ public class GalacticBinaryBandWorkerStateTests
         Assert.Throws<ArgumentException>(() => worker.Update(data.Residual(shifted), 10));
     }
 
+    // Births and the starting search cover only the core, so a source reaches a drift margin by moving there. The test
+    // puts it there directly (Adopt into the left worker, whose prior covers the margin), then checks the hand-off.
     [Fact]
-    public void A_source_that_drifts_out_of_the_core_moves_to_the_neighbour()
+    public void A_source_in_the_drift_margin_moves_to_the_neighbour_that_owns_it()
     {
         var settings = GalacticBinaryBandWorkerTests.SmallSettings;
         var generator = new GalacticBinaryTemplateGenerator(30 * 86400.0, BandTestData.CadenceSeconds);
         var plan = GalacticBinaryBandPlan.Create(settings, generator);
         var (left, right) = (plan.Windows[0], plan.Windows[1]);
-        // A loud source just above the left core's edge, inside the left worker's drift margin: the left worker finds it
-        // there (its prior reaches into the margin), then hands it on.
         var source = new GalacticBinaryParameters(left.CoreEndHz + 3.4 * left.DfHz, 0, 4e-22, 0.2, 1.0, 0.6, 0.3, 1.0);
         var union = new Physics.Series.BinWindow(left.Padded.First, right.Padded.End - left.Padded.First);
-        var data = new BandTestData(30, union, [source], 3);
+        var data = new BandTestData(30, union, [], 3);
         var leftWorker = new GalacticBinaryBandWorker(settings, left, generator, 5);
         var rightWorker = new GalacticBinaryBandWorker(settings, right, new GalacticBinaryTemplateGenerator(30 * 86400.0, BandTestData.CadenceSeconds), 5);
-        leftWorker.Update(data.Residual(left.Padded), 300);
-        rightWorker.Update(data.Residual(right.Padded, leftWorker.CurrentSources()), 20);
-        Assert.Contains(leftWorker.CurrentSources(), s => data.Match(s, source) > 0.9);
+        Assert.Equal(0, leftWorker.Adopt([new DriftedSource(0, 0, source)]));
+        leftWorker.Update(data.Residual(left.Padded), 20);
+        rightWorker.Update(data.Residual(right.Padded), 20);
+        int rightBefore = rightWorker.CurrentSources().Length;
+        Assert.Equal(1, leftWorker.Adopt([new DriftedSource(0, 0, source)]));
+        Assert.Contains(leftWorker.CurrentSources(), s => data.Match(s, source) > 0.999999);
         var drifted = leftWorker.TakeDriftedSources();
-        Assert.Contains(drifted, d => d.Chain == 0 && d.TargetWindow == 1 && data.Match(d.Source, source) > 0.9);
+        var handed = Assert.Single(drifted, d => data.Match(d.Source, source) > 0.999999);
+        Assert.Equal((0, 1), (handed.Chain, handed.TargetWindow));
         Assert.DoesNotContain(leftWorker.CurrentSources(), s => !left.OwnsFrequency(s.FrequencyHz));
-        int before = rightWorker.CurrentSources().Length;
         Assert.Equal(drifted.Count, rightWorker.Adopt(drifted));
-        Assert.Equal(before + drifted.Count(d => d.Chain == 0), rightWorker.CurrentSources().Length);
+        Assert.Equal(rightBefore + drifted.Count(d => d.Chain == 0), rightWorker.CurrentSources().Length);
+        Assert.Contains(rightWorker.CurrentSources(), s => data.Match(s, source) > 0.999999);
         Assert.Throws<ArgumentException>(() => leftWorker.Adopt(drifted));
+        // A source beyond the left worker's drift margin lies outside its prior and is not adopted.
+        Assert.Equal(0, leftWorker.Adopt([new DriftedSource(0, 0, source with { FrequencyHz = right.CoreStartHz + 60 * right.DfHz })]));
     }
 }

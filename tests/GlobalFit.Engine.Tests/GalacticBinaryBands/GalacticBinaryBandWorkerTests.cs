@@ -17,7 +17,7 @@ public class GalacticBinaryBandWorkerTests(ITestOutputHelper output)
         MaxSourcesPerWindow = 6,
         TemperatureCount = 4,
         MaxTemperature = 50,
-        FStatisticCellsPerBin = 1,
+        FStatisticCellsPerBin = 4,
         FStatisticLatitudeCells = 4,
         FStatisticLongitudeCells = 8,
         SampleInterval = 5,

@@ -23,6 +23,9 @@ public class GalacticBinaryBandWorkerTests(ITestOutputHelper output)
         SampleInterval = 5,
     };
 
+    // One SNR-40 source in noise (seed fixed): the worker holds exactly it after three updates of 400 steps, with template
+    // overlap above 0.95 (an SNR-ρ source is located to an expected overlap loss of about (d − 1)/(2ρ²) ≈ 0.002 for
+    // d = 8 parameters, so 0.95 leaves a wide margin; measured 0.988).
     [Fact]
     public void One_loud_source_is_found_with_a_match_above_0_95()
     {

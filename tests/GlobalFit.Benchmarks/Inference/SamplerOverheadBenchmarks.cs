@@ -5,7 +5,7 @@ using GlobalFit.Inference.Tempering;
 namespace GlobalFit.Benchmarks.Inference;
 
 /// <summary>
-/// Sampler overhead per step against a ~10 µs stand-in likelihood. The target (issue #3) is
+/// Sampler overhead per step against a ~10 µs stand-in likelihood. The target is
 /// (Step − LikelihoodAndPrior) / LikelihoodAndPrior ≤ 5 % and 0 B allocated per step.
 /// </summary>
 /// <remarks>Each invocation runs <see cref="StepsPerInvoke"/> operations, so the reported time is per step.

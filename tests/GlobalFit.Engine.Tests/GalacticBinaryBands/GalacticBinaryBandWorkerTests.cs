@@ -43,7 +43,9 @@ public class GalacticBinaryBandWorkerTests(ITestOutputHelper output)
         foreach (var a in last.Statistics.Sampler.Proposals.Where(p => p.TemperatureIndex == 0)) output.WriteLine($"{a.Name}: {a.Rate:F3} of {a.Proposed}");
         var sources = worker.CurrentSources();
         foreach (var s in sources) output.WriteLine($"{s} match {data.Match(s, truth):F4}");
-        Assert.Single(sources);
-        Assert.True(data.Match(sources[0], truth) > 0.95);
+        // The reversible-jump posterior may also hold sub-threshold sources (SNR ~1) that the SNR prior allows; the
+        // claim is about detections: exactly one source at SNR ≥ 5, and it is the injected one.
+        var detected = Assert.Single(sources, s => data.Snr(s) >= 5);
+        Assert.True(data.Match(detected, truth) > 0.95);
     }
 }

@@ -70,8 +70,8 @@ public sealed class FStatisticTests(ITestOutputHelper output)
     [InlineData(false)]
     public void Noiseless_data_give_twice_F_equal_to_the_squared_SNR_and_the_injected_parameters(bool includeT)
     {
-        // Sheet §G.2 (DER): for d = h, a^ = a and 2F = (h|h) = SNR^2 (sheet: 2F/SNR^2 - 1 < 1e-15; we allow 1e-10 as the
-        // issue asks), and §G.3 returns the injected (A, cos iota, psi, phi0) (sheet: 1e-14; we allow 1e-9 relative).
+        // Sheet §G.2 (DER): for d = h, a^ = a and 2F = (h|h) = SNR^2 (sheet: 2F/SNR^2 - 1 < 1e-15; we allow 1e-10 for the
+        // sum over bins in a different order), and §G.3 returns the injected (A, cos iota, psi, phi0) (sheet: 1e-14; we allow 1e-9 relative).
         var band = new FStatisticTestBand(Generator, Source.FrequencyHz, 8);
         band.AddSignal(Source);
         var statistic = new FStatistic(Generator);

@@ -44,7 +44,7 @@ public sealed class TemplateAccuracyTests(ITestOutputHelper output)
         // the same continuous convention, compared on the template's own bins with A/E/T noise weighting (the
         // brute-force spectrum also has leakage tails outside those bins, which no N-bin template can hold). Sources:
         // four seeded random ones (0.1-20 mHz log-uniform, quadrupole fdot) plus the two ends of the range. Criterion of
-        // issue #4: match >= 0.999; we assert it on the plain overlap (no time or phase maximisation), which is stricter.
+        // Acceptance target: match >= 0.999; we assert it on the plain overlap (no time or phase maximisation), which is stricter.
         // Measured worst overlap 0.99959 (16 mHz, fdot 4.5e-14, N = 32). One month at 20 s cadence keeps this ~2 s.
         var sources = new List<GalacticBinaryParameters>
         {

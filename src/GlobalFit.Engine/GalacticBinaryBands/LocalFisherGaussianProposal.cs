@@ -1,3 +1,4 @@
+using GlobalFit.Inference.LinearAlgebra;
 using GlobalFit.Inference.Proposals;
 using GlobalFit.Inference.Random;
 using GlobalFit.Inference.Targets;
@@ -103,27 +104,10 @@ public sealed class LocalFisherGaussianProposal : IProposal
     private double CholeskyLogDeterminant(double[] matrix, out bool ok)
     {
         int d = _dimension;
+        ok = SmallDenseMatrix.CholeskyInPlace(matrix, d);
+        if (!ok) return double.NaN;
         double logDet = 0;
-        for (int j = 0; j < d; j++)
-        {
-            double diagonal = matrix[j * d + j];
-            for (int k = 0; k < j; k++) diagonal -= matrix[j * d + k] * matrix[j * d + k];
-            if (!(diagonal > 0))
-            {
-                ok = false;
-                return double.NaN;
-            }
-            double root = Math.Sqrt(diagonal);
-            matrix[j * d + j] = root;
-            logDet += 2.0 * Math.Log(root);
-            for (int i = j + 1; i < d; i++)
-            {
-                double sum = matrix[i * d + j];
-                for (int k = 0; k < j; k++) sum -= matrix[i * d + k] * matrix[j * d + k];
-                matrix[i * d + j] = sum / root;
-            }
-        }
-        ok = true;
+        for (int j = 0; j < d; j++) logDet += 2.0 * Math.Log(matrix[j * d + j]);
         return logDet;
     }
 }

@@ -5,7 +5,7 @@ namespace GlobalFit.Inference.LinearAlgebra;
 /// Written by hand instead of calling MathNet so that the adaptation steps allocate nothing and so that
 /// results are a fixed function of the inputs (bit-identical resume).
 /// </remarks>
-internal static class SmallDenseMatrix
+public static class SmallDenseMatrix
 {
     /// <summary>
     /// Overwrites the lower triangle of symmetric positive-definite <paramref name="matrix"/> (n×n) with its

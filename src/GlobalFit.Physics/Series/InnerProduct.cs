@@ -47,20 +47,8 @@ public static class InnerProduct
     }
 
     /// <summary><c>(a|a)</c>, the squared noise-weighted norm.</summary>
-    public static double SquaredNorm(ReadOnlySpan<Complex> a, ReadOnlySpan<double> inversePsd, double dfHz)
-    {
-        CheckLengths(a.Length, a.Length, inversePsd.Length);
-        double s0 = 0, s1 = 0;
-        int k = 0;
-        for (; k + 1 < a.Length; k += 2)
-        {
-            s0 += (a[k].Real * a[k].Real + a[k].Imaginary * a[k].Imaginary) * inversePsd[k];
-            s1 += (a[k + 1].Real * a[k + 1].Real + a[k + 1].Imaginary * a[k + 1].Imaginary) * inversePsd[k + 1];
-        }
-        if (k < a.Length)
-            s0 += (a[k].Real * a[k].Real + a[k].Imaginary * a[k].Imaginary) * inversePsd[k];
-        return 4.0 * dfHz * (s0 + s1);
-    }
+    public static double SquaredNorm(ReadOnlySpan<Complex> a, ReadOnlySpan<double> inversePsd, double dfHz) =>
+        Real(a, a, inversePsd, dfHz);
 
     /// <summary>Fills <paramref name="inversePsd"/> with <c>1/S_k</c>; bins with a zero or non-finite PSD get weight 0
     /// so that excluded bins (DC, notches) drop out of every product.</summary>

@@ -1,0 +1,10 @@
+using GlobalFit.Physics.Series;
+
+namespace GlobalFit.Engine.Fitting;
+
+/// <summary>One worker a source class plans: known before the worker exists, so the schedule and the residual-data
+/// actor can be set up first.</summary>
+/// <param name="Id">Stable id, unique in the run (<c>class_id/label</c>).</param>
+/// <param name="Bins">Bins it reads and writes.</param>
+/// <param name="Label">Short human description for progress and traces (e.g. a band's edges).</param>
+public sealed record WorkerDescriptor(string Id, BinWindow Bins, string Label);

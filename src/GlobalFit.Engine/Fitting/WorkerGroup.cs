@@ -1,0 +1,8 @@
+using System.Collections.Immutable;
+
+namespace GlobalFit.Engine.Fitting;
+
+/// <summary>Workers of one class whose templates never share a bin, so they may update in the same stage.</summary>
+/// <param name="Name">Schedule name, <c>class_id.group</c> (e.g. <c>galactic_binaries.even</c>).</param>
+/// <param name="Workers">Its workers.</param>
+public sealed record WorkerGroup(string Name, ImmutableArray<WorkerDescriptor> Workers);

@@ -18,6 +18,11 @@ public static class CommandLineApp
             SimulateCommand.Create(context),
             InspectCommand.Create(context),
             SensitivityCommand.Create(context),
+            FitCommand.Create(context),
+            ResumeCommand.Create(context),
+            StatusCommand.Create(context),
+            CatalogueCommand.Create(context),
+            TraceCommand.Create(context),
             DemoCommand.Create(context),
             BenchCommand.Create(context),
         };

@@ -12,6 +12,9 @@ public static class ExitCodes
     /// <summary>Bad input: an unreadable or invalid file, option or value. Nothing was written.</summary>
     public const int BadInput = 2;
 
+    /// <summary>A fit stopped because a worker failed repeatedly; its last complete iteration is checkpointed.</summary>
+    public const int FitFailed = 3;
+
     /// <summary>Interrupted by the user (Ctrl-C).</summary>
     public const int Interrupted = 130;
 }

@@ -141,6 +141,23 @@ public sealed class ConfigTable
         throw WrongType(key, entry, "an array of tables");
     }
 
+    /// <summary>An array whose items are each a string or an array of strings, as a list of string lists (a bare
+    /// string is a list of one); empty when absent.</summary>
+    public IReadOnlyList<IReadOnlyList<string>> GetStringLists(string key)
+    {
+        if (!_entries.TryGetValue(key, out var entry)) return [];
+        _consumed.Add(key);
+        if (entry.Value is not IReadOnlyList<object> items) throw WrongType(key, entry, "an array");
+        var result = new List<IReadOnlyList<string>>(items.Count);
+        foreach (var item in items)
+        {
+            if (item is string single) result.Add([single]);
+            else if (item is IReadOnlyList<object> inner && inner.All(i => i is string)) result.Add([.. inner.Cast<string>()]);
+            else throw WrongType(key, entry, "an array of strings or of arrays of strings");
+        }
+        return result;
+    }
+
     /// <summary>Fails on the first key of this table (or a nested one) that no reader asked for,
     /// suggesting the closest known key when one is near.</summary>
     /// <param name="knownKeys">Keys this table accepts, used for the suggestion.</param>

@@ -27,7 +27,9 @@ public interface IFitSourceClassPlan
 
     /// <summary>A catalogue builder for this class's samples, weighting by <paramref name="noise"/>.</summary>
     /// <param name="noise">The noise model to compute SNRs and overlaps with (the fit's final one).</param>
-    IClassCatalogue CreateCatalogue(IPsdSource noise);
+    /// <param name="burnInIterations">Samples of iterations 1 … this are left out.</param>
+    /// <param name="minimumConfidence">Entries present in fewer samples than this fraction are left out.</param>
+    IClassCatalogue CreateCatalogue(IPsdSource noise, long burnInIterations, double minimumConfidence);
 
     /// <summary>Writes the resolved section (every key, defaults included) for <c>RUN/run.toml</c>.</summary>
     /// <param name="writer">The writer, positioned at this class's section.</param>

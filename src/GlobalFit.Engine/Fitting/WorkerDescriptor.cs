@@ -7,4 +7,5 @@ namespace GlobalFit.Engine.Fitting;
 /// <param name="Id">Stable id, unique in the run (<c>class_id/label</c>).</param>
 /// <param name="Bins">Bins it reads and writes.</param>
 /// <param name="Label">Short human description for progress and traces (e.g. a band's edges).</param>
-public sealed record WorkerDescriptor(string Id, BinWindow Bins, string Label);
+/// <param name="IncludesT">Whether it uses channel T.</param>
+public sealed record WorkerDescriptor(string Id, BinWindow Bins, string Label, bool IncludesT);

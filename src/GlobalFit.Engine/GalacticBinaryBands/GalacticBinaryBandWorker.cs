@@ -83,6 +83,9 @@ public sealed class GalacticBinaryBandWorker
     /// <summary>The window this worker samples.</summary>
     public GalacticBinaryBandWindow Window { get; }
 
+    /// <summary>Whether the worker reads channel T [<c>include_t</c>].</summary>
+    public bool IncludesT => _settings.IncludeT;
+
     /// <summary>Updates run so far.</summary>
     public long Updates => _state.Updates;
 

@@ -1,0 +1,28 @@
+namespace GlobalFit.Cli.Commands;
+
+/// <summary>The run configuration the demo fits its simulated month with: galactic binaries in the band where the
+/// scenario's loud binaries lie, and the noise levels and foreground refitted every iteration.</summary>
+internal static class DemoFitConfig
+{
+    public const string Toml = """
+        # Built-in demo fit: galactic binaries between 2 and 5 mHz plus the noise model, on the demo's month of data.
+        data = "data.h5"
+        run_folder = "run"
+        seed = 7
+        iterations = 24
+        burn_in = 8
+        checkpoint_every = 8
+
+        [galactic_binaries]
+        f_min_hz = 2e-3
+        f_max_hz = 5e-3
+        window_bins = 256
+        padding_bins = 64
+        steps_per_update = 150
+        temperatures = 4
+        max_sources_per_window = 12
+
+        [noise]
+        steps_per_update = 40
+        """;
+}

@@ -1,0 +1,79 @@
+using System.Diagnostics;
+using System.Globalization;
+using GlobalFit.Engine.Runs;
+
+namespace GlobalFit.Cli.Console;
+
+/// <summary>Shows a fit's progress: on a terminal one redrawn line (iteration, ETA, ln L, sources per class); when
+/// redirected, a plain line at most every ten seconds plus the first and last iterations, so logs stay short.</summary>
+/// <remarks>Called from the coordinator's thread; writes are serialised by a lock because warnings may come from
+/// elsewhere.</remarks>
+public sealed class FitProgressPrinter : IFitProgress
+{
+    private static readonly TimeSpan PlainInterval = TimeSpan.FromSeconds(10);
+    private readonly TextWriter _writer;
+    private readonly bool _interactive;
+    private readonly Stopwatch _clock = Stopwatch.StartNew();
+    private readonly Lock _gate = new();
+    private TimeSpan _lastPlain = TimeSpan.MinValue;
+    private long _firstIteration = -1;
+    private bool _lineOpen;
+
+    /// <summary>Creates a printer writing to the context's error stream.</summary>
+    public FitProgressPrinter(CliContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        _writer = context.Error;
+        _interactive = context.OutputIsTerminal;
+    }
+
+    /// <inheritdoc />
+    public void IterationCompleted(IterationReport report)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        lock (_gate)
+        {
+            if (_firstIteration < 0) _firstIteration = report.Iteration - 1;
+            string line = Describe(report);
+            if (_interactive)
+            {
+                _writer.Write("\r" + line.PadRight(110));
+                _lineOpen = true;
+                if (report.Iteration == report.TotalIterations) EndLine();
+                return;
+            }
+            bool edge = report.Iteration == _firstIteration + 1 || report.Iteration == report.TotalIterations;
+            if (!edge && _clock.Elapsed - _lastPlain < PlainInterval) return;
+            _lastPlain = _clock.Elapsed;
+            _writer.WriteLine(line);
+        }
+    }
+
+    /// <inheritdoc />
+    public void Warning(string message)
+    {
+        lock (_gate)
+        {
+            EndLine();
+            _writer.WriteLine($"warning: {message}");
+        }
+    }
+
+    /// <summary>Ends a redrawn line left open.</summary>
+    public void EndLine()
+    {
+        if (!_lineOpen) return;
+        _writer.WriteLine();
+        _lineOpen = false;
+    }
+
+    private string Describe(IterationReport report)
+    {
+        long done = report.Iteration - _firstIteration;
+        long left = report.TotalIterations - report.Iteration;
+        var eta = done > 0 ? TimeSpan.FromSeconds(_clock.Elapsed.TotalSeconds / done * left) : TimeSpan.Zero;
+        string sources = string.Join(" ", report.SourcesPerClass.Select(c => $"{c.Key}={c.Value}"));
+        return string.Create(CultureInfo.InvariantCulture,
+            $"iteration {report.Iteration}/{report.TotalIterations}  {report.WallTime.TotalSeconds:F2} s  ETA {eta:hh\\:mm\\:ss}  lnL {report.LogLikelihood:F1}  sources {sources}{(report.Checkpointed ? "  [checkpoint]" : "")}");
+    }
+}

@@ -1,0 +1,30 @@
+using Akka.Actor;
+using GlobalFit.Engine.Checkpoints;
+
+namespace GlobalFit.Engine.Actors;
+
+/// <summary>Writes checkpoints atomically into the run folder. A failed write (full disk, permissions) is reported,
+/// not thrown: the previous checkpoint stays intact and the coordinator decides what to do.</summary>
+public sealed class CheckpointerActor : ReceiveActor
+{
+    /// <summary>Creates the actor for <paramref name="runFolder"/>.</summary>
+    public CheckpointerActor(string runFolder)
+    {
+        Receive<WriteCheckpoint>(m =>
+        {
+            string? problem = null;
+            try
+            {
+                CheckpointFile.Write(runFolder, m.Checkpoint);
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            {
+                problem = e.Message;
+            }
+            Sender.Tell(new CheckpointWritten(m.Checkpoint.Iteration, problem));
+        });
+    }
+
+    /// <summary>Props.</summary>
+    public static Props Props(string runFolder) => Akka.Actor.Props.Create(() => new CheckpointerActor(runFolder));
+}

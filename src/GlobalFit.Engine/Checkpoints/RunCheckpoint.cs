@@ -1,0 +1,26 @@
+using System.Collections.Immutable;
+using MessagePack;
+
+namespace GlobalFit.Engine.Checkpoints;
+
+/// <summary>Everything a run needs to continue bit for bit after iteration <see cref="Iteration"/>: every worker's
+/// sampler state (random streams included), every template, and the noise worker's state.</summary>
+/// <param name="FormatVersion">Checkpoint layout version.</param>
+/// <param name="Iteration">Iterations completed.</param>
+/// <param name="ConfigDigest">SHA-256 of the resolved configuration, so a checkpoint is never resumed under another
+/// configuration.</param>
+/// <param name="Workers">Worker states, by ordinal id.</param>
+/// <param name="Templates">Current templates, by ordinal id.</param>
+/// <param name="NoiseState">The noise worker's state.</param>
+[MessagePackObject]
+public sealed record RunCheckpoint(
+    [property: Key(0)] int FormatVersion,
+    [property: Key(1)] long Iteration,
+    [property: Key(2)] string ConfigDigest,
+    [property: Key(3)] ImmutableArray<SavedWorkerState> Workers,
+    [property: Key(4)] ImmutableArray<SavedTemplate> Templates,
+    [property: Key(5)] byte[] NoiseState)
+{
+    /// <summary>The layout this build writes.</summary>
+    public const int CurrentFormatVersion = 1;
+}

@@ -1,0 +1,30 @@
+using GlobalFit.Physics.Noise;
+using GlobalFit.Physics.Series;
+
+namespace GlobalFit.Engine.Fitting;
+
+/// <summary>1/S for A, E and T over every one-sided bin of the record: the weights the residual-data actor serves.</summary>
+/// <param name="A">1/S_A per bin.</param>
+/// <param name="E">1/S_E per bin.</param>
+/// <param name="T">1/S_T per bin.</param>
+/// <remarks>Bin 0 (DC) and any bin where the model's PSD is not positive and finite get weight 0, which excludes them
+/// from every inner product rather than letting a non-finite weight poison a likelihood.</remarks>
+public sealed record InversePsd(double[] A, double[] E, double[] T)
+{
+    /// <summary>Evaluates <paramref name="source"/> over bins 0 … <paramref name="binCount"/> − 1.</summary>
+    public static InversePsd From(IPsdSource source, int binCount)
+    {
+        ArgumentNullException.ThrowIfNull(source);
+        return new InversePsd(Channel(source, AetChannel.A, binCount), Channel(source, AetChannel.E, binCount), Channel(source, AetChannel.T, binCount));
+    }
+
+    private static double[] Channel(IPsdSource source, AetChannel channel, int binCount)
+    {
+        var values = new double[binCount];
+        if (binCount <= 1) return values;
+        source.FillPsd(channel, new BinWindow(1, binCount - 1), values.AsSpan(1));
+        for (int k = 1; k < binCount; k++)
+            values[k] = values[k] > 0 && double.IsFinite(values[k]) ? 1.0 / values[k] : 0.0;
+        return values;
+    }
+}

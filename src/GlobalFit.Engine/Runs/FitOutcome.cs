@@ -1,0 +1,21 @@
+namespace GlobalFit.Engine.Runs;
+
+/// <summary>How a fit ended.</summary>
+/// <param name="Kind">Completed, interrupted or failed.</param>
+/// <param name="IterationsCompleted">Iterations completed in total (including those before a resume).</param>
+/// <param name="CheckpointIteration">Iteration of the newest checkpoint on disk (0 when none).</param>
+/// <param name="Message">For a failure, which worker failed and how; otherwise empty.</param>
+public sealed record FitOutcome(FitOutcomeKind Kind, long IterationsCompleted, long CheckpointIteration, string Message);
+
+/// <summary>How a fit ended.</summary>
+public enum FitOutcomeKind
+{
+    /// <summary>All iterations ran.</summary>
+    Completed,
+
+    /// <summary>Stopped on request; resumable.</summary>
+    Interrupted,
+
+    /// <summary>A worker failed repeatedly; resumable from the last checkpoint once the cause is fixed.</summary>
+    Failed,
+}

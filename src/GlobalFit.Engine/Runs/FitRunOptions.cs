@@ -1,0 +1,7 @@
+namespace GlobalFit.Engine.Runs;
+
+/// <summary>How to run a fit besides its configuration.</summary>
+/// <param name="Progress">Receives progress and warnings.</param>
+/// <param name="OtlpEndpoint">OTLP collector to export telemetry to as well, or null (telemetry.jsonl is always written).</param>
+/// <param name="Cancellation">Cancelling checkpoints the last complete iteration and stops.</param>
+public sealed record FitRunOptions(IFitProgress Progress, Uri? OtlpEndpoint, CancellationToken Cancellation);

@@ -1,0 +1,48 @@
+using System.Collections.Immutable;
+using GlobalFit.Engine.Catalogue;
+using GlobalFit.Engine.Checkpoints;
+using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.NoiseFitting;
+using GlobalFit.Physics.Input;
+
+namespace GlobalFit.Engine.Runs;
+
+/// <summary>Builds a run's catalogue from its catalogue store: every class's entries from the samples after burn-in,
+/// with SNRs and overlaps weighted by the noise model of the newest checkpoint.</summary>
+public static class RunCatalogue
+{
+    /// <summary>Builds the catalogue of the run in <paramref name="layout"/>.</summary>
+    /// <param name="plan">The run's plan (from its run.toml).</param>
+    /// <param name="layout">The run folder.</param>
+    /// <param name="warn">Receives a message when the newest checkpoint is damaged and the previous one is used.</param>
+    /// <returns>The entries of every class, class by class in registration order.</returns>
+    public static ImmutableArray<CatalogueRecord> Build(RunPlan plan, RunFolderLayout layout, Action<string> warn)
+    {
+        ArgumentNullException.ThrowIfNull(plan);
+        ArgumentNullException.ThrowIfNull(layout);
+        var noise = FinalNoise(plan, layout, warn);
+        var catalogues = plan.Classes.ToDictionary(c => c.ClassId, c => c.CreateCatalogue(noise, plan.Settings.BurnIn, plan.Settings.MinConfidence), StringComparer.Ordinal);
+        foreach (var block in new CatalogueStore(layout.Root).ReadAll())
+            if (catalogues.TryGetValue(block.ClassId, out var catalogue)) catalogue.Add(block);
+        return [.. plan.Classes.SelectMany(c => catalogues[c.ClassId].Build())];
+    }
+
+    /// <summary>Builds the catalogue and writes <c>catalogue.csv</c> and <c>catalogue.h5</c> into the run folder.</summary>
+    public static ImmutableArray<CatalogueRecord> Export(RunPlan plan, RunFolderLayout layout, Action<string> warn)
+    {
+        var records = Build(plan, layout, warn);
+        CatalogueCsvWriter.Write(layout.CatalogueCsv, records, overwrite: true);
+        CatalogueHdf5Writer.Write(layout.CatalogueHdf5, records, overwrite: true);
+        return records;
+    }
+
+    private static IPsdSource FinalNoise(RunPlan plan, RunFolderLayout layout, Action<string> warn)
+    {
+        if (!CheckpointFile.Exists(layout.Root))
+            throw new InvalidInputException(layout.Root, null, "the run has no checkpoint yet, so there is no noise model to build the catalogue with");
+        var checkpoint = CheckpointFile.Read(layout.Root, warn);
+        return checkpoint.NoiseState.Length == 0
+            ? new NoiseWorker(plan.Noise, plan.Shape, plan.Settings.Seed)
+            : NoiseWorker.Restore(plan.Noise, plan.Shape, checkpoint.NoiseState);
+    }
+}

@@ -1,0 +1,24 @@
+namespace GlobalFit.Engine.Runs;
+
+/// <summary>The files of a run folder (see the README's "Files a run leaves").</summary>
+/// <param name="Root">The run folder, absolute.</param>
+public sealed record RunFolderLayout(string Root)
+{
+    /// <summary>The resolved configuration.</summary>
+    public string ResolvedConfig => Path.Combine(Root, "run.toml");
+
+    /// <summary>Held open (locked) while a process runs the fit.</summary>
+    public string LockFile => Path.Combine(Root, "fit.lock");
+
+    /// <summary>Where the run stands, rewritten every iteration.</summary>
+    public string StatusFile => Path.Combine(Root, "status.json");
+
+    /// <summary>Spans and metrics.</summary>
+    public string TelemetryFile => Path.Combine(Root, "telemetry.jsonl");
+
+    /// <summary>The catalogue table.</summary>
+    public string CatalogueCsv => Path.Combine(Root, "catalogue.csv");
+
+    /// <summary>The catalogue with posterior samples.</summary>
+    public string CatalogueHdf5 => Path.Combine(Root, "catalogue.h5");
+}

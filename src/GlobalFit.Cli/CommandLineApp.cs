@@ -20,6 +20,7 @@ public static class CommandLineApp
             SensitivityCommand.Create(context),
             DemoCommand.Create(context),
             BenchCommand.Create(context),
+            TraceCommand.Create(context),
         };
         ParseResult parse = root.Parse(args);
         if (parse.Errors.Count > 0)

@@ -59,9 +59,9 @@ public static class TraceCommand
                     o.WriteLine(I($"  stage {s.StageIndex}   no worker updates recorded"));
                     continue;
                 }
-                string others = s.LeadMs is double lead
-                    ? I($", {lead:F1} ms after the next; {s.WorkerCount - 1} others waited {s.TotalWaitMs:F1} ms in total ({s.MeanWaitMs:F1} ms each)")
-                    : ", the only worker";
+                string others = s.LeadMs is not double lead ? ", the only worker"
+                    : s.WorkerCount == 2 ? I($", {lead:F1} ms after the other, which waited {s.TotalWaitMs:F1} ms")
+                    : I($", {lead:F1} ms after the next; {s.WorkerCount - 1} others waited {s.TotalWaitMs:F1} ms in total ({s.MeanWaitMs:F1} ms each)");
                 o.WriteLine(I($"  stage {s.StageIndex}   last: {s.CriticalWorkerId} (compute {s.CriticalWorkerWallMs:F1} ms){others}"));
             }
         }

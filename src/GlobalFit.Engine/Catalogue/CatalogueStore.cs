@@ -75,7 +75,11 @@ public sealed class CatalogueStore
         var cuts = new List<(string Path, long Length)>();
         var dropped = new List<ChainTruncation>();
         var lengths = new Dictionary<string, long>(StringComparer.Ordinal);
-        foreach (var (workerId, fileName) in ChainFiles())
+        var files = ChainFiles().ToList();
+        foreach (var (fileName, committedLength) in manifest.Lengths)
+            if (committedLength > 0 && !files.Any(f => f.FileName == fileName))
+                throw new InvalidInputException(Path.Combine(ChainsFolder, fileName), null, $"is missing but {committedLength} bytes of it were committed");
+        foreach (var (workerId, fileName) in files)
         {
             string path = Path.Combine(ChainsFolder, fileName);
             long committed = manifest.LengthOf(fileName);

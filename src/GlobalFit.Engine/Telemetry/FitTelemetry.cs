@@ -98,7 +98,7 @@ public static class FitTelemetry
     /// <param name="groups">The worker-group names run in the stage.</param>
     /// <returns>The span, or null when nobody listens.</returns>
     public static Activity? StartStage(ActivityContext parent, long iteration, int stageIndex, IReadOnlyList<string> groups) =>
-        Source.StartActivity(StageSpan, ActivityKind.Internal, parent,
+        groups is null ? throw new ArgumentNullException(nameof(groups)) : Source.StartActivity(StageSpan, ActivityKind.Internal, parent,
             [new(IterationAttribute, iteration), new(StageIndexAttribute, stageIndex), new(StageGroupsAttribute, groups.ToArray())]);
 
     /// <summary>Starts a worker-update span under its stage span; call it when the request is sent.</summary>

@@ -45,7 +45,7 @@ public class TraceCommandTests
 
         Assert.Equal(0, result.ExitCode);
         Assert.Contains("iteration 1   1500.0 ms, orchestration overhead 160.0 ms", result.Out);   // 1500 − (950 + 390)
-        Assert.Contains("stage 0   last: galactic_binaries/0001 (compute 950.0 ms), 600.0 ms after the next; 1 others waited 600.0 ms in total", result.Out);
+        Assert.Contains("stage 0   last: galactic_binaries/0001 (compute 950.0 ms), 600.0 ms after the other, which waited 600.0 ms", result.Out);
         Assert.Contains("stage 1   last: noise (compute 390.0 ms), the only worker", result.Out);
         Assert.Contains("summary       2 iterations", result.Out);
         Assert.Contains("galactic_binaries/0000", result.Out.Split("summary")[1]);

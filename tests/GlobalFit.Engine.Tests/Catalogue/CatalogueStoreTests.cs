@@ -113,6 +113,25 @@ public class CatalogueStoreTests
     }
 
     [Fact]
+    public void A_chain_file_cut_short_or_deleted_below_its_commit_point_is_reported()
+    {
+        using var run = new TemporaryRunFolder();
+        var store = new CatalogueStore(run.Path);
+        store.Append(Iteration(1));
+        store.Append(Iteration(2));
+        string cut = ChainFile(run, "noise");
+        using (var stream = new FileStream(cut, FileMode.Open)) stream.SetLength(stream.Length - 3);
+        var shortened = Assert.Throws<InvalidInputException>(() => store.Read("noise").ToList());
+        Assert.Equal(cut, shortened.InputSource);
+        Assert.Contains("cut short", shortened.Problem);
+
+        string gone = ChainFile(run, "galactic_binaries/0001");
+        File.Delete(gone);
+        Assert.Equal(gone, Assert.Throws<InvalidInputException>(() => store.Read("galactic_binaries/0001").ToList()).InputSource);
+        Assert.Throws<InvalidInputException>(() => store.TruncateAfter(1));
+    }
+
+    [Fact]
     public void Truncating_after_an_iteration_drops_exactly_the_later_iterations()
     {
         using var run = new TemporaryRunFolder();

@@ -25,6 +25,7 @@ public static class CommandLineApp
             TraceCommand.Create(context),
             DemoCommand.Create(context),
             BenchCommand.Create(context),
+            TraceCommand.Create(context),
         };
         ParseResult parse = root.Parse(args);
         if (parse.Errors.Count > 0)

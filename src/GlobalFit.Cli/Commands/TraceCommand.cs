@@ -1,0 +1,74 @@
+using System.CommandLine;
+using System.Globalization;
+using GlobalFit.Engine.Telemetry;
+using GlobalFit.Physics.Input;
+
+namespace GlobalFit.Cli.Commands;
+
+/// <summary><c>globalfit trace RUN</c>: per iteration, which worker each stage waited for, by how much, and how much of
+/// the iteration was orchestration rather than compute; read from <c>RUN/telemetry.jsonl</c>.</summary>
+public static class TraceCommand
+{
+    /// <summary>How many of the most often critical workers the text summary lists (JSON lists all).</summary>
+    public const int TextSummaryWorkers = 5;
+
+    /// <summary>Builds the command.</summary>
+    public static Command Create(CliContext context)
+    {
+        var run = new Argument<string>("run") { Description = "Run folder (holding telemetry.jsonl)" };
+        var json = new Option<bool>("--json") { Description = "Print the analysis as JSON" };
+        var last = new Option<int?>("--last") { Description = "Show only the last N iterations (the summary covers them too)" };
+        var command = new Command("trace", "Show the critical path of each iteration: which worker finished last in each stage, by how much, and how long the others waited")
+        {
+            run, json, last,
+        };
+        command.SetAction(parse => Run(context, parse.GetValue(run)!, parse.GetValue(json), parse.GetValue(last)));
+        return command;
+    }
+
+    private static int Run(CliContext context, string runFolder, bool json, int? last)
+    {
+        if (last is < 1) throw new InvalidInputException("--last", null, $"must be at least 1, got {last}");
+        if (!Directory.Exists(runFolder)) throw new InvalidInputException(runFolder, null, "run folder does not exist");
+        string path = Path.Combine(runFolder, TelemetryJsonLines.FileName);
+        if (!File.Exists(path))
+            throw new InvalidInputException(path, null, "telemetry file does not exist: the run has not finished an iteration yet, or is not a run folder");
+        var report = CriticalPathAnalysis.Read(path, last);
+        if (json) context.Out.WriteLine(CliJson.Serialize(TraceJson.From(report)));
+        else WriteText(context.Out, report);
+        return ExitCodes.Success;
+    }
+
+    private static void WriteText(TextWriter o, CriticalPathReport report)
+    {
+        string I(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
+        o.WriteLine($"telemetry     {report.TelemetryPath}");
+        if (report.Iterations.Count == 0)
+        {
+            o.WriteLine("iterations    none finished yet");
+            return;
+        }
+        foreach (var i in report.Iterations)
+        {
+            string share = i.OverheadFractionOfCompute is double f ? I($" ({100 * f:F1} % of {i.WorkerComputeMs:F1} ms worker compute)") : "";
+            o.WriteLine(I($"iteration {i.Iteration}   {i.DurationMs:F1} ms, orchestration overhead {i.OverheadMs:F1} ms{share}"));
+            foreach (var s in i.Stages)
+            {
+                if (s.CriticalWorkerId is null)
+                {
+                    o.WriteLine(I($"  stage {s.StageIndex}   no worker updates recorded"));
+                    continue;
+                }
+                string others = s.LeadMs is not double lead ? ", the only worker"
+                    : s.WorkerCount == 2 ? I($", {lead:F1} ms after the other, which waited {s.TotalWaitMs:F1} ms")
+                    : I($", {lead:F1} ms after the next; {s.WorkerCount - 1} others waited {s.TotalWaitMs:F1} ms in total ({s.MeanWaitMs:F1} ms each)");
+                o.WriteLine(I($"  stage {s.StageIndex}   last: {s.CriticalWorkerId} (compute {s.CriticalWorkerWallMs:F1} ms){others}"));
+            }
+        }
+        var m = report.Summary;
+        o.WriteLine(I($"summary       {m.IterationCount} iterations, mean {m.MeanIterationMs:F1} ms, mean overhead {m.MeanOverheadMs:F1} ms = {m.MeanOverheadPercentOfIteration:F1} % of the iteration")
+            + (m.MeanOverheadPercentOfCompute is double c ? I($", {c:F1} % of worker compute") : ""));
+        foreach (var w in m.MostOftenCritical.Take(TextSummaryWorkers))
+            o.WriteLine(I($"  last in {w.Stages,4} stage(s)   {w.WorkerId}"));
+    }
+}

@@ -1,0 +1,70 @@
+using GlobalFit.Engine.Fitting;
+using GlobalFit.Physics.Input;
+using PureHDF;
+using L = GlobalFit.Engine.Catalogue.CatalogueHdf5Layout;
+
+namespace GlobalFit.Engine.Catalogue;
+
+/// <summary>Writes catalogue records with their posterior samples to an HDF5 file in our layout (Catalogue/LAYOUT.md):
+/// <c>/catalogue/&lt;class id&gt;/entries</c>, summaries and <c>samples</c>.</summary>
+public static class CatalogueHdf5Writer
+{
+    /// <summary>Writes <paramref name="records"/> to <paramref name="path"/>, atomically.</summary>
+    /// <param name="path">Destination.</param>
+    /// <param name="records">The entries; rows of a class keep this order.</param>
+    /// <param name="overwrite">Replace an existing file.</param>
+    /// <exception cref="InvalidInputException">The file exists and <paramref name="overwrite"/> is false, or cannot be written.</exception>
+    /// <exception cref="ArgumentException">A record is inconsistent, or the records of one class differ in parameters.</exception>
+    public static void Write(string path, IReadOnlyList<CatalogueRecord> records, bool overwrite)
+    {
+        CatalogueRecordChecks.Require(records);
+        var file = new H5File { Attributes = { [L.FormatVersionAttribute] = L.FormatVersion } };
+        var catalogue = new H5Group();
+        foreach (var group in records.GroupBy(r => r.ClassId, StringComparer.Ordinal).OrderBy(g => g.Key, StringComparer.Ordinal))
+            catalogue[group.Key] = ClassGroup([.. group]);
+        file[L.CatalogueGroup] = catalogue;
+        AtomicFile.Write(path, overwrite, stream => file.Write(stream));
+    }
+
+    private static H5Group ClassGroup(IReadOnlyList<CatalogueRecord> records)
+    {
+        string[] columns = [.. records[0].ParameterNames];
+        int width = columns.Length;
+        long sampleRows = records.Sum(r => (long)r.SampleCount);
+        var entries = new CatalogueEntryRow[records.Count];
+        var median = new double[checked(records.Count * width)];
+        var lower = new double[median.Length];
+        var upper = new double[median.Length];
+        var samples = new double[checked(sampleRows * width)];
+        var sampleEntry = new long[sampleRows];
+        long row = 0;
+        for (int e = 0; e < records.Count; e++)
+        {
+            var r = records[e];
+            entries[e] = new CatalogueEntryRow { Id = r.Id, Confidence = r.Confidence, Snr = r.Snr, FirstSample = row, SampleCount = r.SampleCount };
+            r.Median.CopyTo(median, e * width);
+            r.Lower.CopyTo(lower, e * width);
+            r.Upper.CopyTo(upper, e * width);
+            r.Samples.CopyTo(samples, checked((int)(row * width)));
+            sampleEntry.AsSpan(checked((int)row), r.SampleCount).Fill(e);
+            row += r.SampleCount;
+        }
+        return new H5Group
+        {
+            Attributes = { [L.ColumnsAttribute] = columns },
+            [L.EntriesDataset] = entries,
+            [L.MedianDataset] = Table(median, records.Count, columns),
+            [L.LowerDataset] = Table(lower, records.Count, columns),
+            [L.UpperDataset] = Table(upper, records.Count, columns),
+            [L.SamplesDataset] = Table(samples, sampleRows, columns),
+            [L.SampleEntryDataset] = sampleEntry,
+        };
+    }
+
+    private static H5Dataset Table(double[] values, long rows, string[] columns)
+    {
+        var dataset = new H5Dataset(values, fileDims: [(ulong)rows, (ulong)columns.Length]);
+        dataset.Attributes[L.ColumnsAttribute] = columns;
+        return dataset;
+    }
+}

@@ -1,0 +1,48 @@
+namespace GlobalFit.Engine.Telemetry;
+
+/// <summary>Who held up one stage: the worker whose update finished last, and how long the others waited for it.</summary>
+/// <param name="StageIndex">0-based stage index.</param>
+/// <param name="WorkerCount">Worker updates in the stage.</param>
+/// <param name="CriticalWorkerId">The worker that finished last (null for a stage without worker spans).</param>
+/// <param name="CriticalWorkerWallMs">Its compute time (<c>globalfit.worker.wall_ms</c>, or its span length if absent).</param>
+/// <param name="LeadMs">How much later it finished than the second-to-last; null with one worker.</param>
+/// <param name="TotalWaitMs">Σ over the other workers of (last finish − their finish).</param>
+/// <param name="MeanWaitMs">That sum over the number of other workers; null with one worker.</param>
+/// <param name="SlowestWallMs">The largest compute time in the stage: the least the stage could take.</param>
+public sealed record StageCriticalPath(int StageIndex, int WorkerCount, string? CriticalWorkerId, double CriticalWorkerWallMs,
+    double? LeadMs, double TotalWaitMs, double? MeanWaitMs, double SlowestWallMs);
+
+/// <summary>The critical path of one iteration.</summary>
+/// <param name="Iteration">1-based iteration.</param>
+/// <param name="TraceId">Trace id of its span (W3C hex).</param>
+/// <param name="StartUtc">When it started.</param>
+/// <param name="DurationMs">Its duration.</param>
+/// <param name="Stages">Its stages by index.</param>
+/// <param name="WorkerComputeMs">Σ compute time of all its worker updates.</param>
+/// <param name="OverheadMs">Orchestration overhead: duration − Σ over stages of the slowest worker's compute time
+/// (residual updates, messaging, queueing and scheduling — what perfect scheduling of the same compute would save).</param>
+/// <param name="OverheadFractionOfCompute">Overhead / total worker compute; null when no compute was recorded.</param>
+public sealed record IterationCriticalPath(long Iteration, string TraceId, DateTimeOffset StartUtc, double DurationMs,
+    IReadOnlyList<StageCriticalPath> Stages, double WorkerComputeMs, double OverheadMs, double? OverheadFractionOfCompute);
+
+/// <summary>How often a worker was the last of its stage.</summary>
+/// <param name="WorkerId">The worker.</param>
+/// <param name="Stages">Stages (over all iterations analysed) in which it finished last.</param>
+public sealed record CriticalWorkerCount(string WorkerId, int Stages);
+
+/// <summary>Figures over the iterations analysed.</summary>
+/// <param name="IterationCount">Iterations analysed.</param>
+/// <param name="MostOftenCritical">Workers by how often they finished last in their stage (most first, ties by id).</param>
+/// <param name="MeanIterationMs">Mean iteration duration; null without iterations.</param>
+/// <param name="MeanOverheadMs">Mean orchestration overhead; null without iterations.</param>
+/// <param name="MeanOverheadPercentOfIteration">Mean of overhead / duration, in percent; null without iterations.</param>
+/// <param name="MeanOverheadPercentOfCompute">Mean of overhead / total worker compute, in percent, over the iterations that
+/// recorded compute; null if none did.</param>
+public sealed record CriticalPathSummary(int IterationCount, IReadOnlyList<CriticalWorkerCount> MostOftenCritical, double? MeanIterationMs,
+    double? MeanOverheadMs, double? MeanOverheadPercentOfIteration, double? MeanOverheadPercentOfCompute);
+
+/// <summary>The critical-path analysis of a telemetry file.</summary>
+/// <param name="TelemetryPath">The file read.</param>
+/// <param name="Iterations">The iterations analysed, by start time.</param>
+/// <param name="Summary">Figures over them.</param>
+public sealed record CriticalPathReport(string TelemetryPath, IReadOnlyList<IterationCriticalPath> Iterations, CriticalPathSummary Summary);

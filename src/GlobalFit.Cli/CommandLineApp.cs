@@ -25,7 +25,6 @@ public static class CommandLineApp
             TraceCommand.Create(context),
             DemoCommand.Create(context),
             BenchCommand.Create(context),
-            TraceCommand.Create(context),
         };
         ParseResult parse = root.Parse(args);
         if (parse.Errors.Count > 0)

@@ -4,6 +4,7 @@ using Akka.Actor;
 using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Engine.Runs;
+using GlobalFit.Engine.Telemetry;
 
 namespace GlobalFit.Engine.Actors;
 
@@ -116,7 +117,7 @@ public sealed class FitCoordinator : ReceiveActor
         _iterationBlocks.Clear();
         _slowest.Clear();
         _iterationStarted = Stopwatch.GetTimestamp();
-        _iterationSpan = FitTracing.StartIteration(_current);
+        _iterationSpan = FitTelemetry.StartIteration(_current);
         _stageIndex = -1;
         NextStage();
     }
@@ -251,7 +252,7 @@ public sealed class FitCoordinator : ReceiveActor
         _iterationSpan?.Dispose();
         _iterationSpan = null;
         var wall = Stopwatch.GetElapsedTime(_iterationStarted);
-        FitTracing.RecordIteration(wall.TotalMilliseconds);
+        FitTelemetry.IterationDuration.Record(wall.TotalMilliseconds);
         bool due = _completed % _plan.Settings.CheckpointEvery == 0
             || _completed == _plan.Settings.Iterations
             || Stopwatch.GetElapsedTime(_lastCheckpointTimestamp).TotalMinutes >= _plan.Settings.CheckpointMinutes;

@@ -2,6 +2,7 @@ using System.Diagnostics;
 using Akka.Actor;
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Engine.NoiseFitting;
+using GlobalFit.Engine.Telemetry;
 
 namespace GlobalFit.Engine.Actors;
 
@@ -47,12 +48,12 @@ public sealed class NoiseActor : ReceiveActor
     {
         var worker = _worker ?? throw new InvalidOperationException("noise worker received work before it was loaded");
         long started = Stopwatch.GetTimestamp();
-        using var span = FitTracing.StartWorkerSpan(request.TraceParent);
+        using var span = FitTracing.StartWorkerSpan(request.TraceParent, request.Iteration, request.StageIndex, WorkerId, WorkerId, "noise PSD");
         var update = worker.Update(request.Residual, request.Steps);
         var psd = InversePsd.From(worker, _binCount);
         byte[] state = worker.SaveState();
         long finished = Stopwatch.GetTimestamp();
-        FitTracing.RecordWorkerUpdate(span, request.Iteration, request.StageIndex, WorkerId, WorkerId, "noise PSD", 0, update.Statistics.Steps,
+        FitTelemetry.RecordWorkerResult(span, WorkerId, 0, update.Statistics.Steps,
             update.Statistics.Acceptance, Stopwatch.GetElapsedTime(started, finished).TotalMilliseconds,
             Stopwatch.GetElapsedTime(request.SentTimestamp, started).TotalMilliseconds);
         Sender.Tell(new NoiseUpdated(update.Samples with { Iteration = request.Iteration }, update.Statistics, psd, state, finished));

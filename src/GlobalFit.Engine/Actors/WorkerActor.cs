@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using Akka.Actor;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Telemetry;
 
 namespace GlobalFit.Engine.Actors;
 
@@ -45,7 +46,7 @@ public sealed class WorkerActor : ReceiveActor
     {
         var worker = Loaded();
         long started = Stopwatch.GetTimestamp();
-        using var span = FitTracing.StartWorkerSpan(request.TraceParent);
+        using var span = FitTracing.StartWorkerSpan(request.TraceParent, request.Iteration, request.StageIndex, _workerId, _classId, _label);
         var update = worker.Update(request.Residual, request.Steps);
         var handovers = worker.TakeHandovers();
         if (handovers.Count > 0) update = update with { Template = worker.CurrentTemplate() };
@@ -53,7 +54,7 @@ public sealed class WorkerActor : ReceiveActor
         byte[] state = worker.SaveState();
         long finished = Stopwatch.GetTimestamp();
         var statistics = update.Statistics;
-        FitTracing.RecordWorkerUpdate(span, request.Iteration, request.StageIndex, _workerId, _classId, _label, statistics.SourceCount,
+        FitTelemetry.RecordWorkerResult(span, _workerId, statistics.SourceCount,
             statistics.Steps, statistics.Acceptance, Stopwatch.GetElapsedTime(started, finished).TotalMilliseconds,
             Stopwatch.GetElapsedTime(request.SentTimestamp, started).TotalMilliseconds);
         Sender.Tell(new WorkerUpdated(_workerId, update, handovers, state, finished));

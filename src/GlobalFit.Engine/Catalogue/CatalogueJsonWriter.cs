@@ -26,6 +26,16 @@ public static class CatalogueJsonWriter
         });
     }
 
+    /// <summary>The document as text, for printing.</summary>
+    /// <param name="records">The entries, in this order.</param>
+    public static string Format(IReadOnlyList<CatalogueRecord> records)
+    {
+        CatalogueRecordChecks.Require(records);
+        using var buffer = new MemoryStream();
+        using (var json = new Utf8JsonWriter(buffer, new JsonWriterOptions { Indented = false })) WriteDocument(json, records);
+        return System.Text.Encoding.UTF8.GetString(buffer.ToArray());
+    }
+
     private static void WriteDocument(Utf8JsonWriter json, IReadOnlyList<CatalogueRecord> records)
     {
         json.WriteStartObject();

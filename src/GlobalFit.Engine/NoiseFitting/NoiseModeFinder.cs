@@ -64,6 +64,7 @@ internal static class NoiseModeFinder
         {
             // Cannot happen with the regularised diagonal unless the data are degenerate; fall back to prior-sized steps.
             Array.Clear(precision);
+            // The factor of a diagonal precision is its square root: σ_i = 1 % of the prior width.
             for (int i = 0; i < d; i++) precision[i * d + i] = 1.0 / (0.01 * layout.Schema.Parameters[i].Width);
         }
         return new LaplaceApproximation(mean, precision);

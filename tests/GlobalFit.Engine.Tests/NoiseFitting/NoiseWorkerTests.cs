@@ -139,4 +139,17 @@ public class NoiseWorkerTests
         Assert.Throws<ArgumentException>(() => worker.Update(wrong, 5));
         Assert.Throws<ArgumentException>(() => worker.Update(Data.Value.Residual(worker.Bins, includeT: false), 5));
     }
+
+    [Fact]
+    public void Without_t_and_foreground_only_the_ae_instrument_levels_are_sampled()
+    {
+        var worker = new NoiseWorker(Settings() with { IncludeT = false, Foreground = false }, NoiseTestData.Shape, 5);
+        var update = worker.Update(Data.Value.Residual(worker.Bins, includeT: false), 20);
+        Assert.Equal(["acc_ae", "oms_ae"], update.Samples.ParameterNames);
+        Assert.Equal(20, update.Samples.SampleCount);
+        Assert.Equal(0.0, update.Levels.ForegroundAmplitude);
+        Assert.Equal(Start.AccelerationAsdT, update.Levels.AccelerationAsdT); // unfitted T stays at its starting level
+        Assert.Equal("noise", update.Samples.WorkerId);
+        Assert.Equal(0, update.Samples.Iteration);
+    }
 }

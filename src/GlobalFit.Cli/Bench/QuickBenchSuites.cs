@@ -13,6 +13,7 @@ public static class QuickBenchSuites
     [
         new("inner product and FFT", SeriesBench.Run),
         new("noise synthesis", NoiseBench.Run),
+        new("noise likelihood", NoiseLikelihoodBench.Run),
         new("sampler overhead", SamplerBench.Run),
         new("galactic-binary template", GalacticBinaryBench.Run),
     ];

@@ -103,7 +103,7 @@ public sealed class FitCoordinatorTests : Akka.TestKit.Xunit2.TestKit
         var harness = new CoordinatorHarness(Sys, iterations: 1_000_000);
         harness.Coordinator.Tell(new StartFit(), TestActor);
         AwaitCondition(() => harness.Progress.Reports.Count >= 3, Patience);
-        harness.Coordinator.Tell(new StopFit());
+        harness.Coordinator.Tell(new StopFit(), TestActor);
         var finished = ExpectMsg<FitFinished>(Patience);
         Assert.Equal(FitOutcomeKind.Interrupted, finished.Outcome.Kind);
         Assert.Equal(finished.Outcome.IterationsCompleted, finished.Outcome.CheckpointIteration);

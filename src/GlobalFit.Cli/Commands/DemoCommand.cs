@@ -84,13 +84,13 @@ public static class DemoCommand
         o.WriteLine("    truth          entry      SNR inj  SNR fit  conf    f0     fdot   amp    beta   lambda");
         foreach (var f in result.Found)
         {
-            string E(string name) => f.ErrorsInSigma.TryGetValue(name, out double v) ? v.ToString("+0.0;-0.0", CultureInfo.InvariantCulture).PadLeft(6) : "     -";
+            string E(string name) => f.ErrorsInSigma.TryGetValue(name, out double v) ? (Math.Round(v, 1) == 0 ? 0.0 : v).ToString("+0.0;-0.0;0.0", CultureInfo.InvariantCulture).PadLeft(6) : "     -";
             o.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"    {f.TruthId,-14} {f.EntryId,-10} {f.InjectedSnr,7:F1}  {f.EntrySnr,7:F1}  {f.Confidence,4:F2}  {E("f0_hz")} {E("fdot_hz_s")} {E("amp")} {E("beta_rad")} {E("lambda_rad")}"));
         }
         foreach (var m in result.Missed)
             o.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  missed {m.TruthId} at {m.Key * 1e3:F5} mHz, SNR {m.InjectedSnr:F1}"));
         foreach (var s in result.Spurious)
-            o.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  spurious {s.Id} at {s.Median[0] * 1e3:F5} mHz, SNR {s.Snr:F1}, confidence {s.Confidence:F2}"));
+            o.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  spurious {s.Id} at {s.Median[s.ParameterNames.IndexOf("f0_hz")] * 1e3:F5} mHz, SNR {s.Snr:F1}, confidence {s.Confidence:F2}"));
     }
 }

@@ -18,11 +18,18 @@ internal static class DemoFitConfig
         f_max_hz = 5e-3
         window_bins = 256
         padding_bins = 64
-        steps_per_update = 150
+        steps_per_update = 300
         temperatures = 4
         max_sources_per_window = 12
+        # A coarser F-statistic map than the default: the map is rebuilt every update and dominates its cost.
+        fstat_cells_per_bin = 1
+        fstat_latitude_cells = 4
+        fstat_longitude_cells = 8
 
         [noise]
         steps_per_update = 40
+        # The demo scenario simulates the foreground of the one-year fit; the default would take the shape nearest
+        # the record's length (half a year), which is louder between 1 and 4 mHz.
+        foreground_fit_years = 1
         """;
 }

@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.CommandLine;
 using System.Globalization;
 using GlobalFit.Engine.Catalogue;
@@ -28,7 +29,10 @@ public static class StatusCommand
         var status = RunStatus.Read(layout) ?? throw new InvalidInputException(layout.StatusFile, null, "missing: the run never started");
         bool alive = RunLock.IsHeld(layout);
         string state = alive ? "running" : status.State == "running" ? "stopped (the process ended without finishing; resume it)" : status.State;
-        var samples = new CatalogueStore(layout.Root).CountSamples();
+        // Per class: a run may hold thousands of band workers.
+        var samples = new CatalogueStore(layout.Root).CountSamples()
+            .GroupBy(w => w.Key.Split('/')[0], StringComparer.Ordinal)
+            .ToImmutableSortedDictionary(g => g.Key, g => g.Sum(w => w.Value), StringComparer.Ordinal);
         if (json)
         {
             context.Out.WriteLine(CliJson.Serialize(new Dictionary<string, object>

@@ -117,7 +117,7 @@ public sealed class FitCoordinator : ReceiveActor
         _iterationBlocks.Clear();
         _slowest.Clear();
         _iterationStarted = Stopwatch.GetTimestamp();
-        _iterationSpan = FitTelemetry.StartIteration(_current);
+        _iterationSpan = FitTelemetry.StartIteration(_current, _plan.Settings.Threads);
         _stageIndex = -1;
         NextStage();
     }

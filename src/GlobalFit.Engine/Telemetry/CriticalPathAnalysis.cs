@@ -98,6 +98,8 @@ public static class CriticalPathAnalysis
         foreach (var iteration in spans.Where(s => s.Name == FitTelemetry.IterationSpan).OrderBy(s => s.StartUtc).ThenBy(s => s.Line))
         {
             long number = iteration.RequireLong(FitTelemetry.IterationAttribute, path);
+            // Without the thread count (older files) a stage's least time is its slowest worker alone.
+            double threads = iteration.OptionalDouble(FitTelemetry.ThreadsAttribute) ?? double.PositiveInfinity;
             var stages = new List<StageCriticalPath>();
             double compute = 0;
             foreach (var stage in children[(iteration.TraceId, iteration.SpanId)].Where(s => s.Name == FitTelemetry.StageSpan))
@@ -107,26 +109,28 @@ public static class CriticalPathAnalysis
                     .Select(w => (Id: w.RequireText(FitTelemetry.WorkerIdAttribute, path), End: w.EndUtc,
                                   WallMs: w.OptionalDouble(FitTelemetry.WorkerWallMsAttribute) ?? w.DurationMs))
                     .OrderByDescending(w => w.End).ThenBy(w => w.Id, StringComparer.Ordinal).ToList();
-                stages.Add(Stage(index, workers));
+                stages.Add(Stage(index, workers, threads));
                 compute += workers.Sum(w => w.WallMs);
             }
             stages.Sort((a, b) => a.StageIndex.CompareTo(b.StageIndex));
-            double overhead = iteration.DurationMs - stages.Sum(s => s.SlowestWallMs);
+            double overhead = iteration.DurationMs - stages.Sum(s => s.LeastMs);
             iterations.Add(new IterationCriticalPath(number, iteration.TraceId, iteration.StartUtc, iteration.DurationMs, stages, compute, overhead,
                 compute > 0 ? overhead / compute : null));
         }
         return iterations;
     }
 
-    private static StageCriticalPath Stage(int index, List<(string Id, DateTimeOffset End, double WallMs)> byFinishDescending)
+    private static StageCriticalPath Stage(int index, List<(string Id, DateTimeOffset End, double WallMs)> byFinishDescending, double threads)
     {
-        if (byFinishDescending.Count == 0) return new StageCriticalPath(index, 0, null, 0, null, 0, null, 0);
+        if (byFinishDescending.Count == 0) return new StageCriticalPath(index, 0, null, 0, null, 0, null, 0, 0);
+        double slowest = byFinishDescending.Max(w => w.WallMs);
+        double least = Math.Max(slowest, byFinishDescending.Sum(w => w.WallMs) / threads);
         var last = byFinishDescending[0];
         double totalWait = byFinishDescending.Skip(1).Sum(w => (last.End - w.End).TotalMilliseconds);
         int others = byFinishDescending.Count - 1;
         return new StageCriticalPath(index, byFinishDescending.Count, last.Id, last.WallMs,
             others == 0 ? null : (last.End - byFinishDescending[1].End).TotalMilliseconds,
-            totalWait, others == 0 ? null : totalWait / others, byFinishDescending.Max(w => w.WallMs));
+            totalWait, others == 0 ? null : totalWait / others, slowest, least);
     }
 
     private static string Line(int number) => string.Create(CultureInfo.InvariantCulture, $"line {number}");

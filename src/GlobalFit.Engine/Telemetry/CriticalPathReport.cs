@@ -8,9 +8,11 @@ namespace GlobalFit.Engine.Telemetry;
 /// <param name="LeadMs">How much later it finished than the second-to-last; null with one worker.</param>
 /// <param name="TotalWaitMs">Σ over the other workers of (last finish − their finish).</param>
 /// <param name="MeanWaitMs">That sum over the number of other workers; null with one worker.</param>
-/// <param name="SlowestWallMs">The largest compute time in the stage: the least the stage could take.</param>
+/// <param name="SlowestWallMs">The largest compute time in the stage.</param>
+/// <param name="LeastMs">The least the stage could take: the larger of its slowest worker's compute and its total compute
+/// spread evenly over the compute threads.</param>
 public sealed record StageCriticalPath(int StageIndex, int WorkerCount, string? CriticalWorkerId, double CriticalWorkerWallMs,
-    double? LeadMs, double TotalWaitMs, double? MeanWaitMs, double SlowestWallMs);
+    double? LeadMs, double TotalWaitMs, double? MeanWaitMs, double SlowestWallMs, double LeastMs);
 
 /// <summary>The critical path of one iteration.</summary>
 /// <param name="Iteration">1-based iteration.</param>
@@ -19,8 +21,9 @@ public sealed record StageCriticalPath(int StageIndex, int WorkerCount, string? 
 /// <param name="DurationMs">Its duration.</param>
 /// <param name="Stages">Its stages by index.</param>
 /// <param name="WorkerComputeMs">Σ compute time of all its worker updates.</param>
-/// <param name="OverheadMs">Orchestration overhead: duration − Σ over stages of the slowest worker's compute time
-/// (residual updates, messaging, queueing and scheduling — what perfect scheduling of the same compute would save).</param>
+/// <param name="OverheadMs">Orchestration overhead: duration − Σ over stages of the least time the stage could take
+/// (<see cref="StageCriticalPath.LeastMs"/>): residual updates, messaging, catalogue appends, checkpoints and imperfect
+/// scheduling — what a perfect scheduler of the same compute would save.</param>
 /// <param name="OverheadFractionOfCompute">Overhead / total worker compute; null when no compute was recorded.</param>
 public sealed record IterationCriticalPath(long Iteration, string TraceId, DateTimeOffset StartUtc, double DurationMs,
     IReadOnlyList<StageCriticalPath> Stages, double WorkerComputeMs, double OverheadMs, double? OverheadFractionOfCompute);

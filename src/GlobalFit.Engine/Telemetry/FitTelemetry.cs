@@ -52,6 +52,10 @@ public static class FitTelemetry
     /// <summary>Compute time of the update in milliseconds (excluding queueing and messaging).</summary>
     public const string WorkerWallMsAttribute = "globalfit.worker.wall_ms";
 
+    /// <summary>Threads of the compute dispatcher (iteration span): a stage cannot take less than its total compute
+    /// divided by this.</summary>
+    public const string ThreadsAttribute = "globalfit.threads";
+
     /// <summary>Milliseconds from the request being sent to the worker starting on it.</summary>
     public const string WorkerQueueMsAttribute = "globalfit.worker.queue_ms";
 
@@ -88,8 +92,9 @@ public static class FitTelemetry
     /// <summary>Starts the root span of an iteration.</summary>
     /// <param name="iteration">1-based iteration.</param>
     /// <returns>The span, or null when nobody listens.</returns>
-    public static Activity? StartIteration(long iteration) =>
-        Source.StartActivity(IterationSpan, ActivityKind.Internal, parentContext: default, tags: [new(IterationAttribute, iteration)]);
+    /// <param name="threads">Threads of the compute dispatcher.</param>
+    public static Activity? StartIteration(long iteration, int threads) =>
+        Source.StartActivity(IterationSpan, ActivityKind.Internal, parentContext: default, tags: [new(IterationAttribute, iteration), new(ThreadsAttribute, threads)]);
 
     /// <summary>Starts a stage span under <paramref name="iteration"/>'s span.</summary>
     /// <param name="parent">The iteration span's context.</param>

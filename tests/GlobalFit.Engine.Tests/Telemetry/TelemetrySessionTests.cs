@@ -17,7 +17,7 @@ public class TelemetrySessionTests
         ActivityTraceId trace;
         using (var session = TelemetrySession.Start(run.Path, otlpEndpoint: null))
         {
-            using (var iteration = FitTelemetry.StartIteration(7))
+            using (var iteration = FitTelemetry.StartIteration(7, threads: 64))
             {
                 Assert.NotNull(iteration);
                 trace = iteration.TraceId;
@@ -76,7 +76,7 @@ public class TelemetrySessionTests
         var clock = Stopwatch.StartNew();
         using (TelemetrySession.Start(run.Path, new Uri("http://127.0.0.1:9")))
         {
-            using var iteration = FitTelemetry.StartIteration(1);
+            using var iteration = FitTelemetry.StartIteration(1, threads: 64);
             trace = iteration!.TraceId;
         }
         Assert.True(clock.Elapsed < TimeSpan.FromMilliseconds(4 * TelemetrySession.ShutdownTimeoutMilliseconds), $"took {clock.Elapsed}");

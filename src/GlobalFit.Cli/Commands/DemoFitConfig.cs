@@ -4,13 +4,17 @@ namespace GlobalFit.Cli.Commands;
 /// scenario's loud binaries lie, and the noise levels and foreground refitted every iteration.</summary>
 internal static class DemoFitConfig
 {
-    public const string Toml = """
+    /// <summary>Iterations of the demo fit by default (about three minutes on two cores).</summary>
+    public const int Iterations = 24;
+
+    /// <summary>The configuration with <paramref name="iterations"/> iterations, a third of them burn-in.</summary>
+    public static string Toml(int iterations) => $$"""
         # Built-in demo fit: galactic binaries between 2 and 5 mHz plus the noise model, on the demo's month of data.
         data = "data.h5"
         run_folder = "run"
         seed = 7
-        iterations = 24
-        burn_in = 8
+        iterations = {{iterations}}
+        burn_in = {{iterations / 3}}
         checkpoint_every = 8
 
         [galactic_binaries]

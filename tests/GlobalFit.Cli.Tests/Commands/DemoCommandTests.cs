@@ -5,16 +5,18 @@ namespace GlobalFit.Cli.Tests.Commands;
 public class DemoCommandTests
 {
     [Fact]
-    public void Demo_runs_twice_in_its_own_folder_and_refuses_a_foreign_one()
+    public void Demo_simulates_fits_and_compares_in_its_own_folder_runs_again_and_refuses_a_foreign_one()
     {
         using var folder = new TempFolder();
         string demo = folder.File("demo");
-        var first = CliRun.Run("demo", "--out", demo);
+        // Two iterations instead of the default 24 keep this under a minute; the full demo is the README's command.
+        var first = CliRun.Run("demo", "--out", demo, "--iterations", "2");
         Assert.Equal(0, first.ExitCode);
         Assert.Contains("mean estimate/model", first.Out);
-        Assert.True(File.Exists(Path.Combine(demo, "data.h5")));
-        Assert.True(File.Exists(Path.Combine(demo, "noise.png")));
-        Assert.Equal(0, CliRun.Run("demo", "--out", demo).ExitCode);
+        Assert.Matches(@"injected with SNR >= 7; found \d+, missed \d+; \d+ catalogue entries, \d+ spurious", first.Out);
+        foreach (string file in new[] { "data.h5", "noise.png", "fit.toml", "run/run.toml", "run/catalogue.csv", "run/catalogue.h5", "run/telemetry.jsonl" })
+            Assert.True(File.Exists(Path.Combine(demo, file)), file);
+        Assert.Equal(0, CliRun.Run("demo", "--out", demo, "--iterations", "2").ExitCode);
 
         string foreign = folder.File("mine");
         Directory.CreateDirectory(foreign);

@@ -70,14 +70,18 @@ public sealed class RunPlan
     /// <summary>Checks a parsed configuration.</summary>
     /// <param name="root">Its root table.</param>
     /// <param name="configFolder">Folder relative paths are taken from.</param>
-    public static RunPlan FromConfig(ConfigTable root, string configFolder)
+    public static RunPlan FromConfig(ConfigTable root, string configFolder) => FromConfig(root, configFolder, knownShape: null);
+
+    /// <summary>Checks a parsed configuration against <paramref name="knownShape"/> instead of its data file (which then
+    /// need not exist): for validating shipped examples without their data.</summary>
+    internal static RunPlan FromConfig(ConfigTable root, string configFolder, FitDataShape? knownShape)
     {
         ArgumentNullException.ThrowIfNull(root);
         foreach (string planned in FitSourceClasses.Planned)
             if (root.Has(planned))
                 throw root.Invalid(planned, $"source class '{planned}' has no implementation in this build yet; remove the section (implemented: {string.Join(", ", FitSourceClasses.All.Select(c => c.ClassId))})");
-        var settings = RunSettings.FromConfig(root, configFolder);
-        var shape = ReadShape(settings.DataPath);
+        var settings = RunSettings.FromConfig(root, configFolder, requireData: knownShape is null);
+        var shape = knownShape ?? ReadShape(settings.DataPath);
         var classes = new List<IFitSourceClassPlan>();
         foreach (var sourceClass in FitSourceClasses.All)
             if (root.GetTable(sourceClass.ClassId) is { } section)

@@ -47,7 +47,8 @@ public sealed record RunSettings
     /// <summary>Reads the top-level keys of <paramref name="root"/>.</summary>
     /// <param name="root">The configuration's root table.</param>
     /// <param name="configFolder">Folder relative paths are taken from.</param>
-    public static RunSettings FromConfig(ConfigTable root, string configFolder)
+    /// <param name="requireData">Whether the data file must exist now.</param>
+    public static RunSettings FromConfig(ConfigTable root, string configFolder, bool requireData = true)
     {
         ArgumentNullException.ThrowIfNull(root);
         string data = root.GetString("data", "");
@@ -67,7 +68,7 @@ public sealed record RunSettings
             MaxWorkerFailures = (int)root.GetInteger("max_worker_failures", defaults.MaxWorkerFailures, 1, 1000),
             MinConfidence = root.GetInRange("min_confidence", defaults.MinConfidence, 0.0, 1.0),
         };
-        if (!File.Exists(settings.DataPath)) throw root.Invalid("data", $"file not found: {settings.DataPath}");
+        if (requireData && !File.Exists(settings.DataPath)) throw root.Invalid("data", $"file not found: {settings.DataPath}");
         return settings;
     }
 

@@ -1,6 +1,8 @@
 using System.Text.RegularExpressions;
 using GlobalFit.Cli.Tests.Support;
 using GlobalFit.Engine.Configuration;
+using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Simulation;
 
 namespace GlobalFit.Cli.Tests.Commands;
@@ -43,6 +45,38 @@ public class DocumentedExamplesTests
         Assert.True(block.Success, "README has no galactic-binary example");
         var scenario = SimulationScenario.FromConfig(ConfigDocument.Parse("[observation]\nduration_days = 2\n" + block.Groups["body"].Value, "README.md"));
         Assert.Single(scenario.Sources);
+    }
+
+    public static TheoryData<string> FitConfigFiles()
+    {
+        var data = new TheoryData<string>();
+        foreach (var file in Directory.GetFiles(RepositoryFiles.PathOf("configs"), "fit-*.toml").Order())
+            data.Add(Path.GetFileName(file));
+        return data;
+    }
+
+    // The data files the examples name are made by the commands in their comments, not shipped; each is checked
+    // against the shape of that data: a year at 5 s for the multi-day example, a month at 5 s for the others.
+    [Theory]
+    [MemberData(nameof(FitConfigFiles))]
+    public void Every_shipped_run_configuration_is_valid_for_the_data_it_names(string file)
+    {
+        string path = RepositoryFiles.PathOf(Path.Combine("configs", file));
+        var shape = file.Contains("year", StringComparison.Ordinal)
+            ? new FitDataShape("year", 6_311_520, 5.0, 0.0)
+            : new FitDataShape("month", 518_400, 5.0, 0.0);
+        var plan = RunPlan.FromConfig(ConfigDocument.Load(path), Path.GetDirectoryName(path)!, shape);
+        Assert.True(plan.Settings.Iterations > plan.Settings.BurnIn);
+    }
+
+    [Fact]
+    public void The_run_configuration_shown_in_the_readme_is_valid()
+    {
+        string readme = File.ReadAllText(RepositoryFiles.PathOf("README.md"));
+        var block = Regex.Match(readme, "```toml\n(?<body>data = .*?)```", RegexOptions.Singleline);
+        Assert.True(block.Success, "README has no run-configuration example");
+        var plan = RunPlan.FromConfig(ConfigDocument.Parse(block.Groups["body"].Value, "README.md"), "/", new FitDataShape("month", 518_400, 5.0, 0.0));
+        Assert.Equal(3, plan.Schedule.Stages.Length);
     }
 
     [Fact]

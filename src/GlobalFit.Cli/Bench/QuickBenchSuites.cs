@@ -16,5 +16,6 @@ public static class QuickBenchSuites
         new("noise likelihood", NoiseLikelihoodBench.Run),
         new("sampler overhead", SamplerBench.Run),
         new("galactic-binary template", GalacticBinaryBench.Run),
+        new("engine orchestration", OrchestrationBench.Run),
     ];
 }

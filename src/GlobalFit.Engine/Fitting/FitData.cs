@@ -35,8 +35,12 @@ public sealed class FitData
     /// <summary>Total time in gaps (zero-filled).</summary>
     public double GapSeconds { get; }
 
-    /// <summary>Wraps spectra that are already transformed (tests, simulations made in the frequency domain).</summary>
-    internal static FitData FromSpectra(FitDataShape shape, Complex[] a, Complex[] e, Complex[] t) => new(shape, a, e, t, 0.0);
+    /// <summary>Wraps spectra that are already transformed (simulations made in the frequency domain, benchmarks).</summary>
+    /// <param name="shape">The record's shape; each array holds its <see cref="FitDataShape.BinCount"/> bins.</param>
+    /// <param name="a">Channel A.</param>
+    /// <param name="e">Channel E.</param>
+    /// <param name="t">Channel T.</param>
+    public static FitData FromSpectra(FitDataShape shape, Complex[] a, Complex[] e, Complex[] t) => new(shape, a, e, t, 0.0);
 
     /// <summary>Transforms an observation.</summary>
     /// <param name="observation">The observation.</param>

@@ -91,6 +91,26 @@ public class FitProcessTests
     }
 
     [Fact]
+    public void A_terminate_signal_checkpoints_the_last_complete_iteration_and_exits_with_code_130()
+    {
+        using var folder = new TempFolder();
+        string data = folder.File("data.h5");
+        Assert.Equal(0, CliRun.Run("simulate", folder.Write("scenario.toml", Scenario), "--out", data).ExitCode);
+        string run = folder.File("run");
+        using var fit = Globalfit.Start("fit", folder.Write("fit.toml", Config(data, run).Replace("checkpoint_every = 1", "checkpoint_every = 100", StringComparison.Ordinal)));
+        WaitForIteration(run, 2, fit, TimeSpan.FromMinutes(5));
+        using (var signal = Process.Start("kill", ["-TERM", fit.Id.ToString(System.Globalization.CultureInfo.InvariantCulture)])) signal.WaitForExit();
+        Assert.True(fit.WaitForExit(TimeSpan.FromMinutes(2)), "the fit did not stop after SIGTERM");
+        Assert.Equal(130, fit.ExitCode);
+        var status = JsonDocument.Parse(CliRun.Run("status", run, "--json").Out).RootElement;
+        Assert.Equal("interrupted", status.GetProperty("state").GetString());
+        long iteration = status.GetProperty("iteration").GetInt64();
+        Assert.True(iteration >= 2);
+        // checkpoint_every = 100, so this checkpoint can only come from the signal.
+        Assert.Equal(iteration, status.GetProperty("checkpoint_iteration").GetInt64());
+    }
+
+    [Fact]
     public void Resume_of_a_folder_that_is_not_a_run_exits_with_code_two_and_names_it()
     {
         using var folder = new TempFolder();

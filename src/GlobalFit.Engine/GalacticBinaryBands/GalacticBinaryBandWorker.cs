@@ -18,7 +18,8 @@ namespace GlobalFit.Engine.GalacticBinaryBands;
 /// it rebuilds the likelihood (<see cref="GalacticBinaryBandModel"/>), the birth density from the F-statistic of that
 /// residual (<see cref="GalacticBinaryBirthDensity"/>) and the Fisher proposal, re-scores every chain's configuration
 /// against the new residual, and continues the sampler from its saved state for the requested number of steps. Moves:
-/// birth and death (probability <c>jump_probability</c>), otherwise one source moved by a Gaussian from that source's own Fisher matrix
+/// birth and death (probability <c>jump_probability</c>), split and merge of nearby sources (<see cref="GalacticBinarySplitMerge"/>,
+/// probability <c>split_merge_probability</c>), otherwise one source moved by a Gaussian from that source's own Fisher matrix
 /// (<see cref="LocalFisherGaussianProposal"/>, weight 0.45), Fisher-eigen jumps of the Inference library (0.15),
 /// differential evolution (0.15), adaptive Gaussian (0.15) or the antipodal sky reflection (0.1). The prior is
 /// <see cref="GalacticBinarySourcePrior"/> with a uniform count prior on 0 … <c>max_sources_per_window</c>.</para>
@@ -236,6 +237,9 @@ public sealed class GalacticBinaryBandWorker
         ],
         MaxSources = _settings.MaxSourcesPerWindow,
         JumpProbability = _settings.JumpProbability,
+        SplitMergeProbability = _settings.SplitMergeProbability,
+        SplitMerge = new GalacticBinarySplitMerge(_settings.SplitMergeBins * Window.DfHz,
+            _settings.MaxFrequencyDerivativeHzS - _settings.MinFrequencyDerivativeHzS),
         Seed = _state.Seed,
         StreamId = (ulong)Window.Index,
     };

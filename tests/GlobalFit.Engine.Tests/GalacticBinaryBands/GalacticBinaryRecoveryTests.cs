@@ -102,6 +102,7 @@ public class GalacticBinaryRecoveryTests(ITestOutputHelper output)
         for (int round = 0; round < 8; round++) driver.Round(500, record: round >= 4);
         var (loud, recovered, confident, spurious) = driver.Score(injected);
         output.WriteLine($"{recovered}/{loud} recovered ({(double)recovered / loud:P1}), {spurious}/{confident} spurious, {clock.Elapsed.TotalSeconds:F0} s, {plan.Windows.Length} windows");
+        foreach (string line in driver.DescribeSpurious(injected)) output.WriteLine(line);
         Assert.True(recovered >= 0.9 * loud, $"{recovered}/{loud} recovered");
         Assert.True(spurious <= 0.1 * confident, $"{spurious}/{confident} spurious");
     }

@@ -104,7 +104,9 @@ internal sealed class BandFitDriver
             yield return $"spurious f0 {f * 1e3:F6} mHz snr {entry.MedianSnr:F1} conf {entry.Confidence:F2} | nearest loud-weighted truth "
                 + $"{(truth.FrequencyHz - f) / _data.DfHz:+0.00;-0.00} bins snr {_data.Snr(truth):F1} match {MedianMatch(entry, truth):F2} | "
                 + $"neighbour entry {(neighbour is null ? double.NaN : (neighbour.Median.FrequencyHz - f) / _data.DfHz):+0.00;-0.00} bins "
-                + $"snr {neighbour?.MedianSnr:F1} conf {neighbour?.Confidence:F2}";
+                + $"snr {neighbour?.MedianSnr:F1} conf {neighbour?.Confidence:F2} | injected within 4 bins: "
+                + string.Join(", ", injected.Where(s => Math.Abs(s.FrequencyHz - f) < 4 * _data.DfHz && _data.Snr(s) > 2)
+                    .Select(s => $"{(s.FrequencyHz - f) / _data.DfHz:+0.00;-0.00} bins snr {_data.Snr(s):F1} match {MedianMatch(entry, s):F2}"));
         }
     }
 }

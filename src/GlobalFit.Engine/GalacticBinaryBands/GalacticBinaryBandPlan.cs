@@ -69,6 +69,10 @@ public sealed class GalacticBinaryBandPlan
             throw new ArgumentException($"must exceed f_min_hz ({settings.MinFrequencyHz} Hz), got {settings.MaxFrequencyHz} Hz", "f_max_hz");
         if (!(settings.MaxFrequencyDerivativeHzS > settings.MinFrequencyDerivativeHzS))
             throw new ArgumentException($"must exceed fdot_min_hz_s ({settings.MinFrequencyDerivativeHzS}), got {settings.MaxFrequencyDerivativeHzS}", "fdot_max_hz_s");
+        if (!(settings.JumpProbability + settings.SplitMergeProbability <= 1.0))
+            throw new ArgumentException($"with jump_probability {settings.JumpProbability} must not exceed {1.0 - settings.JumpProbability}, got {settings.SplitMergeProbability}", "split_merge_probability");
+        if (!(settings.SplitMergeBins > 0) || !double.IsFinite(settings.SplitMergeBins))
+            throw new ArgumentException($"must be positive, got {settings.SplitMergeBins}", "split_merge_bins");
         if (!(settings.SnrMax > settings.SnrPriorPeak))
             throw new ArgumentException($"must exceed snr_prior_peak ({settings.SnrPriorPeak}), got {settings.SnrMax}", "snr_max");
         if (settings.MaxFrequencyHz >= nyquistBin * df)

@@ -16,7 +16,7 @@ public sealed record GalacticBinaryBandSettings
         "f_min_hz", "f_max_hz", "window_bins", "padding_bins", "max_sources_per_window", "fdot_min_hz_s", "fdot_max_hz_s",
         "steps_per_update", "temperatures", "chains_per_temperature", "max_temperature", "jump_probability",
         "snr_prior_peak", "snr_max", "include_t", "fstat_cells_per_bin", "fstat_latitude_cells", "fstat_longitude_cells",
-        "fisher_refresh_steps", "sample_interval",
+        "fisher_refresh_steps", "sample_interval", "split_merge_probability", "split_merge_bins",
     ];
 
     /// <summary>Lower edge of the analysed range [<c>f_min_hz</c>].</summary>
@@ -59,6 +59,14 @@ public sealed record GalacticBinaryBandSettings
 
     /// <summary>Probability that a step is a birth or death [<c>jump_probability</c>].</summary>
     public double JumpProbability { get; init; } = 0.2;
+
+    /// <summary>Probability that a step is a split or merge (<see cref="GalacticBinarySplitMerge"/>)
+    /// [<c>split_merge_probability</c>]; with <see cref="JumpProbability"/> at most 1, 0 turns the moves off.</summary>
+    public double SplitMergeProbability { get; init; } = 0.1;
+
+    /// <summary>Largest frequency separation of a split pair [<c>split_merge_bins</c>].</summary>
+    /// <value>Frequency bins of the record.</value>
+    public double SplitMergeBins { get; init; } = 4.0;
 
     /// <summary>ρ*, the SNR at which the amplitude prior peaks [<c>snr_prior_peak</c>].</summary>
     public double SnrPriorPeak { get; init; } = 10.0;
@@ -109,6 +117,8 @@ public sealed record GalacticBinaryBandSettings
             ChainsPerTemperature = (int)table.GetInteger("chains_per_temperature", defaults.ChainsPerTemperature, 1, 64),
             MaxTemperature = table.GetInRange("max_temperature", defaults.MaxTemperature, 1.0, 1e12),
             JumpProbability = table.GetInRange("jump_probability", defaults.JumpProbability, 0.0, 1.0),
+            SplitMergeProbability = table.GetInRange("split_merge_probability", defaults.SplitMergeProbability, 0.0, 1.0),
+            SplitMergeBins = table.GetInRange("split_merge_bins", defaults.SplitMergeBins, 0.01, 1e6),
             SnrPriorPeak = table.GetPositive("snr_prior_peak", defaults.SnrPriorPeak),
             SnrMax = table.GetPositive("snr_max", defaults.SnrMax),
             IncludeT = table.GetBool("include_t", defaults.IncludeT),

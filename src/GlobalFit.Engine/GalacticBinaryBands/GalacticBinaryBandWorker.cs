@@ -18,9 +18,11 @@ namespace GlobalFit.Engine.GalacticBinaryBands;
 /// it rebuilds the likelihood (<see cref="GalacticBinaryBandModel"/>), the birth density from the F-statistic of that
 /// residual (<see cref="GalacticBinaryBirthDensity"/>) and the Fisher proposal, re-scores every chain's configuration
 /// against the new residual, and continues the sampler from its saved state for the requested number of steps. Moves:
-/// birth and death (probability <c>jump_probability</c>), otherwise one source moved by a Gaussian from that source's own Fisher matrix
-/// (<see cref="LocalFisherGaussianProposal"/>, weight 0.45), Fisher-eigen jumps of the Inference library (0.15),
-/// differential evolution (0.15), adaptive Gaussian (0.15) or the antipodal sky reflection (0.1). The prior is
+/// birth and death (probability <c>jump_probability</c>), split and merge of nearby sources (<see cref="GalacticBinarySplitMerge"/>,
+/// probability <c>split_merge_probability</c>), otherwise one source moved by a Gaussian from that source's own Fisher matrix
+/// (<see cref="LocalFisherGaussianProposal"/>, weight 0.4), Fisher-eigen jumps of the Inference library (0.15),
+/// differential evolution (0.15), adaptive Gaussian (0.1), the antipodal sky reflection (0.1) or a fresh draw of the
+/// birth density (<see cref="BirthDensityJumpProposal"/>, 0.1). The prior is
 /// <see cref="GalacticBinarySourcePrior"/> with a uniform count prior on 0 … <c>max_sources_per_window</c>.</para>
 /// <para>A new worker's chains start from the sources of <see cref="GreedyFStatisticSearch"/> on its first residual
 /// rather than empty, which keeps loud sources from being fitted as a patchwork of partial sources.</para>
@@ -126,7 +128,7 @@ public sealed class GalacticBinaryBandWorker
         var map = new FStatisticCellDensity(FStatisticMap.Compute(_statistic, residual, grid), MapUniformFraction);
         var birth = new GalacticBinaryBirthDensity(_statistic, residual, map, snrScale);
         var fisher = new GalacticBinarySourceFisher(_generator, residual, snrScale, _prior.Schema);
-        var samplerSettings = SamplerSettings(fisher);
+        var samplerSettings = SamplerSettings(fisher, birth);
         var start = _state.Sampler ?? Seeded(new ReversibleJumpSampler<GalacticBinaryBandModel>(model, birth, samplerSettings).CaptureState(),
             GreedyFStatisticSearch.Run(_statistic, residual, grid, _settings.MaxSourcesPerWindow), snrScale);
         var sampler = ReversibleJumpSampler<GalacticBinaryBandModel>.Resume(model, birth, samplerSettings, Rescored(start, model));
@@ -221,7 +223,7 @@ public sealed class GalacticBinaryBandWorker
         return adopted;
     }
 
-    private ReversibleJumpSettings SamplerSettings(GalacticBinarySourceFisher fisher) => new()
+    private ReversibleJumpSettings SamplerSettings(GalacticBinarySourceFisher fisher, GalacticBinaryBirthDensity birth) => new()
     {
         Tempering = new TemperingSettings
         {
@@ -231,14 +233,18 @@ public sealed class GalacticBinaryBandWorker
         },
         WithinProposals =
         [
-            LocalFisherGaussianProposal.Spec(0.45, fisher),
+            LocalFisherGaussianProposal.Spec(0.4, fisher),
             ProposalSpec.FisherEigen(0.15, fisher, _settings.FisherRefreshSteps),
             ProposalSpec.DifferentialEvolution(0.15),
-            ProposalSpec.AdaptiveGaussian(0.15),
+            ProposalSpec.AdaptiveGaussian(0.1),
             AntipodalSkyProposal.Spec(0.1),
+            BirthDensityJumpProposal.Spec(0.1, birth),
         ],
         MaxSources = _settings.MaxSourcesPerWindow,
         JumpProbability = _settings.JumpProbability,
+        SplitMergeProbability = _settings.SplitMergeProbability,
+        SplitMerge = new GalacticBinarySplitMerge(_settings.SplitMergeBins * Window.DfHz,
+            _settings.MaxFrequencyDerivativeHzS - _settings.MinFrequencyDerivativeHzS),
         Seed = _state.Seed,
         StreamId = (ulong)Window.Index,
     };

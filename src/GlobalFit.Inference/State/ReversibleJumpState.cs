@@ -23,7 +23,9 @@ namespace GlobalFit.Inference.State;
 /// <param name="ProposalStates">Per chain, per within-model proposal: checkpoint of stateful proposals, null otherwise.</param>
 /// <param name="ProposalsProposed">Per chain and proposal: attempts.</param>
 /// <param name="ProposalsAccepted">Per chain and proposal: acceptances.</param>
-/// <param name="JumpCounters">Per chain: births proposed, births accepted, deaths proposed, deaths accepted.</param>
+/// <param name="JumpCounters">Per chain: births proposed, births accepted, deaths proposed, deaths accepted, splits proposed,
+/// splits accepted, merges proposed, merges accepted (states written before split/merge existed hold the first four only,
+/// and still resume).</param>
 /// <param name="EvidenceSums">Σ ln L per rung since the last evidence reset.</param>
 /// <param name="EvidenceCounts">Number of terms per rung.</param>
 [MessagePackObject]

@@ -27,8 +27,18 @@ namespace GlobalFit.Inference.Transdimensional;
 /// birth: min{1, π_β(k+1, θ′)/π_β(k, θ) · d_{k+1} / (b_k b(u))} and
 /// death: min{1, π_β(k−1, θ′)/π_β(k, θ) · b_{k−1} b(θ_removed) / d_k}
 /// (Green 1995, eq. 7 with the dimension-matching of §3.3).</para>
-/// <para>Split/merge moves are not implemented; births from a data-driven density (e.g. an F-statistic map)
-/// usually serve the same purpose for well-separated sources.</para>
+/// <para>Split/merge (optional, probability <see cref="ReversibleJumpSettings.SplitMergeProbability"/>, map
+/// <see cref="ISourceSplitMerge"/> from the source class): given k, a split is chosen with probability s_k (0 at k = 0
+/// and at the cap, 1 at k = 1, ½ otherwise) and a merge with m_k = 1 − s_k for k ≥ 2. A split picks one of the k
+/// slots, draws u ~ g(· | θ), writes θ₁ into the slot and θ₂ at the end, then swaps the end with a uniformly chosen
+/// slot among the k+1. A merge picks a slot among the k+1 and swaps it to the end (undoing that swap), picks the
+/// partner slot among the remaining k, merges the pair into the partner's slot and drops the end: the exact inverse,
+/// so the slot choices 1/k · 1/(k+1) cancel and the acceptance probabilities are
+/// split: min{1, π_β(k+1, θ′)/π_β(k, θ) · m_{k+1} |J| / (s_k g(u | θ))} and
+/// merge: min{1, π_β(k−1, θ′)/π_β(k, θ) · s_{k−1} g(u | θ) / (m_k |J|)}, with |J| = |∂(θ₁, θ₂)/∂(θ, u)| at the
+/// split point (Green 1995, eq. 7 and §3.3; split/merge as in Richardson &amp; Green 1997, JRSS B 59, 731, §3.2).
+/// Births from a data-driven density (e.g. an F-statistic map) find well-separated sources; split/merge repairs one
+/// signal fitted as two nearby sources, which a death alone cannot undo because the survivor is then mis-fitted.</para>
 /// <para>Steady-state steps allocate nothing. Not thread-safe.</para>
 /// </remarks>
 /// <typeparam name="TModel">The model; a struct or sealed class gets a devirtualised loop.</typeparam>
@@ -39,7 +49,14 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
     private const int BirthsAccepted = 1;
     private const int DeathsProposed = 2;
     private const int DeathsAccepted = 3;
-    private const int JumpCounterCount = 4;
+    private const int SplitsProposed = 4;
+    private const int SplitsAccepted = 5;
+    private const int MergesProposed = 6;
+    private const int MergesAccepted = 7;
+    private const int JumpCounterCount = 8;
+
+    // States saved before split/merge existed hold only the birth and death counters of each chain.
+    private const int BirthDeathCounterCount = 4;
     private const ulong SwapStreamId = ulong.MaxValue;
 
     private readonly TModel _model;
@@ -61,6 +78,9 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
     private readonly RandomStream[] _random;
     private readonly long[] _jumpCounters;
     private readonly double[] _removedSource;
+    private readonly double[] _mergedSource;
+    private readonly double[] _auxiliary;
+    private readonly ISourceSplitMerge? _splitMerge;
     private readonly int[] _acceptedPerPair;
     private readonly EvidenceAccumulator _evidence;
     private double[] _candidate;
@@ -92,6 +112,9 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
         _sources = new double[_chainCount][];
         _candidate = new double[capacity];
         _removedSource = new double[_dimension];
+        _mergedSource = new double[_dimension];
+        _auxiliary = new double[_dimension];
+        _splitMerge = settings.SplitMergeProbability > 0.0 ? settings.SplitMerge : null;
         _counts = new int[_chainCount];
         _logLikelihoods = new double[_chainCount];
         _logPriors = new double[_chainCount];
@@ -229,6 +252,10 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
 
             proposals.Add(new ProposalAcceptance("birth", rung, births, birthsAccepted));
             proposals.Add(new ProposalAcceptance("death", rung, deaths, deathsAccepted));
+            if (_splitMerge is not null)
+            {
+                AddSplitMergeAcceptance(proposals, rung);
+            }
         }
 
         return new SamplerStatistics(
@@ -237,6 +264,22 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
             proposals.ToImmutable(),
             _ladder.SwapAcceptanceRates(),
             [.. _evidence.Means()]);
+    }
+
+    private void AddSplitMergeAcceptance(ImmutableArray<ProposalAcceptance>.Builder proposals, int rung)
+    {
+        long splits = 0, splitsAccepted = 0, merges = 0, mergesAccepted = 0;
+        for (int r = 0; r < _replicas; r++)
+        {
+            int offset = (rung * _replicas + r) * JumpCounterCount;
+            splits += _jumpCounters[offset + SplitsProposed];
+            splitsAccepted += _jumpCounters[offset + SplitsAccepted];
+            merges += _jumpCounters[offset + MergesProposed];
+            mergesAccepted += _jumpCounters[offset + MergesAccepted];
+        }
+
+        proposals.Add(new ProposalAcceptance("split", rung, splits, splitsAccepted));
+        proposals.Add(new ProposalAcceptance("merge", rung, merges, mergesAccepted));
     }
 
     /// <summary>Copies the complete sampler state (allocates; call between advances).</summary>
@@ -270,7 +313,7 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
         if (state.SourceDimension != _dimension || state.MaxSources != _maxSources || state.ChainsPerTemperature != _replicas
             || state.SourceCounts.Length != _chainCount || state.Sources.Length != _chainCount
             || state.ProposalStates.Length != _chainCount || state.ProposalsProposed.Length != _chainCount * proposalCount
-            || state.JumpCounters.Length != _jumpCounters.Length)
+            || (state.JumpCounters.Length != _jumpCounters.Length && state.JumpCounters.Length != _chainCount * BirthDeathCounterCount))
         {
             throw new ArgumentException("Saved state does not match the model and settings.", nameof(state));
         }
@@ -296,9 +339,24 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
         state.LogLikelihoods.CopyTo(_logLikelihoods, 0);
         state.LogPriors.CopyTo(_logPriors, 0);
         state.ChainRandom.CopyTo(_random, 0);
-        state.JumpCounters.CopyTo(_jumpCounters, 0);
+        RestoreJumpCounters(state.JumpCounters);
         _swapRandom = state.SwapRandom;
         _evidence.Restore(state.EvidenceSums, state.EvidenceCounts);
+    }
+
+    private void RestoreJumpCounters(long[] saved)
+    {
+        if (saved.Length == _jumpCounters.Length)
+        {
+            saved.CopyTo(_jumpCounters, 0);
+            return;
+        }
+
+        Array.Clear(_jumpCounters);
+        for (int c = 0; c < _chainCount; c++)
+        {
+            saved.AsSpan(c * BirthDeathCounterCount, BirthDeathCounterCount).CopyTo(_jumpCounters.AsSpan(c * JumpCounterCount));
+        }
     }
 
     private void Initialise(int chain, int count)
@@ -332,23 +390,119 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
 
     private double BirthProbability(int count) => count == 0 ? 1.0 : count >= _maxSources ? 0.0 : 0.5;
 
+    private double SplitProbability(int count) => count < 1 || count >= _maxSources ? 0.0 : count == 1 ? 1.0 : 0.5;
+
+    private double MergeProbability(int count) => count < 2 ? 0.0 : 1.0 - SplitProbability(count);
+
     private void UpdateChain(int chain)
     {
         ref RandomStream random = ref _random[chain];
-        if (_maxSources > 0 && random.NextDouble() < _settings.JumpProbability)
+        if (_maxSources > 0)
         {
-            if (random.NextDouble() < BirthProbability(_counts[chain]))
+            // One uniform chooses the move kind; with no split/merge this is the same draw and the same branches as
+            // before split/merge existed, so fixed-seed runs without it are unchanged.
+            double move = random.NextDouble();
+            if (move < _settings.JumpProbability)
             {
-                Birth(chain, ref random);
+                if (random.NextDouble() < BirthProbability(_counts[chain]))
+                {
+                    Birth(chain, ref random);
+                }
+                else
+                {
+                    Death(chain, ref random);
+                }
+
+                return;
             }
-            else
+
+            if (_splitMerge is not null && move < _settings.JumpProbability + _settings.SplitMergeProbability)
             {
-                Death(chain, ref random);
+                SplitOrMerge(chain, _splitMerge, ref random);
+                return;
             }
         }
-        else if (_counts[chain] > 0)
+
+        if (_counts[chain] > 0)
         {
             WithinModel(chain, ref random);
+        }
+    }
+
+    private void SplitOrMerge(int chain, ISourceSplitMerge map, ref RandomStream random)
+    {
+        int count = _counts[chain];
+        double split = SplitProbability(count);
+        if (split == 0.0 && MergeProbability(count) == 0.0)
+        {
+            return;
+        }
+
+        if (random.NextDouble() < split)
+        {
+            Split(chain, map, ref random);
+        }
+        else
+        {
+            Merge(chain, map, ref random);
+        }
+    }
+
+    private void Split(int chain, ISourceSplitMerge map, ref RandomStream random)
+    {
+        int count = _counts[chain];
+        _jumpCounters[chain * JumpCounterCount + SplitsProposed]++;
+        _sources[chain].AsSpan(0, count * _dimension).CopyTo(_candidate);
+        int slot = random.NextInt(count);
+        ReadOnlySpan<double> source = _sources[chain].AsSpan(slot * _dimension, _dimension);
+        double logAuxiliaryDensity = map.DrawAuxiliary(source, _auxiliary, ref random);
+        if (!(logAuxiliaryDensity > double.NegativeInfinity))
+        {
+            return;
+        }
+
+        Span<double> first = _candidate.AsSpan(slot * _dimension, _dimension);
+        Span<double> second = _candidate.AsSpan(count * _dimension, _dimension);
+        if (!map.TrySplit(source, _auxiliary, first, second, out double logJacobian)
+            || !double.IsFinite(logJacobian) || !_schema.Contains(first) || !_schema.Contains(second))
+        {
+            return;
+        }
+
+        SwapSources(_candidate, random.NextInt(count + 1), count);
+        double logJumpRatio = Math.Log(MergeProbability(count + 1)) - Math.Log(SplitProbability(count)) - logAuxiliaryDensity + logJacobian;
+        if (TryAccept(chain, count + 1, logJumpRatio, ref random))
+        {
+            _jumpCounters[chain * JumpCounterCount + SplitsAccepted]++;
+        }
+    }
+
+    private void Merge(int chain, ISourceSplitMerge map, ref RandomStream random)
+    {
+        int count = _counts[chain];
+        _jumpCounters[chain * JumpCounterCount + MergesProposed]++;
+        _sources[chain].AsSpan(0, count * _dimension).CopyTo(_candidate);
+        SwapSources(_candidate, random.NextInt(count), count - 1);
+        int slot = random.NextInt(count - 1);
+        Span<double> first = _candidate.AsSpan(slot * _dimension, _dimension);
+        ReadOnlySpan<double> second = _candidate.AsSpan((count - 1) * _dimension, _dimension);
+        if (!map.TryMerge(first, second, _mergedSource, _auxiliary, out double logJacobian) || !double.IsFinite(logJacobian)
+            || !_schema.Contains(_mergedSource))
+        {
+            return;
+        }
+
+        double logAuxiliaryDensity = map.LogAuxiliaryDensity(_mergedSource, _auxiliary);
+        if (!(logAuxiliaryDensity > double.NegativeInfinity))
+        {
+            return;
+        }
+
+        _mergedSource.CopyTo(first);
+        double logJumpRatio = Math.Log(SplitProbability(count - 1)) - Math.Log(MergeProbability(count)) + logAuxiliaryDensity - logJacobian;
+        if (TryAccept(chain, count - 1, logJumpRatio, ref random))
+        {
+            _jumpCounters[chain * JumpCounterCount + MergesAccepted]++;
         }
     }
 

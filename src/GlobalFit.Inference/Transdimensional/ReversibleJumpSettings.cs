@@ -22,6 +22,14 @@ public sealed record ReversibleJumpSettings
     /// <summary>Probability that a step attempts a birth or death instead of a within-model move, in [0, 1].</summary>
     public double JumpProbability { get; init; } = 0.2;
 
+    /// <summary>Probability that a step attempts a split or merge instead of a within-model move, in [0, 1]; together
+    /// with <see cref="JumpProbability"/> at most 1. Default 0: no split/merge moves and no extra random draws, so a run
+    /// without them is unchanged.</summary>
+    public double SplitMergeProbability { get; init; }
+
+    /// <summary>The split/merge map of the source class; required when <see cref="SplitMergeProbability"/> is positive.</summary>
+    public ISourceSplitMerge? SplitMerge { get; init; }
+
     /// <summary>The run seed.</summary>
     public ulong Seed { get; init; }
 
@@ -52,6 +60,16 @@ public sealed record ReversibleJumpSettings
         if (!(JumpProbability >= 0.0 && JumpProbability <= 1.0))
         {
             throw new ArgumentException("JumpProbability must lie in [0, 1].", nameof(JumpProbability));
+        }
+
+        if (!(SplitMergeProbability >= 0.0 && JumpProbability + SplitMergeProbability <= 1.0))
+        {
+            throw new ArgumentException("SplitMergeProbability must be non-negative and at most 1 − JumpProbability.", nameof(SplitMergeProbability));
+        }
+
+        if (SplitMergeProbability > 0.0 && SplitMerge is null)
+        {
+            throw new ArgumentException("SplitMerge must be set when SplitMergeProbability is positive.", nameof(SplitMerge));
         }
     }
 }

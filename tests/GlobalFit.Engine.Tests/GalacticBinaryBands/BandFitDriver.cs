@@ -86,4 +86,27 @@ internal sealed class BandFitDriver
         int spurious = entries.Count(e => !near[e].Any(s => MedianMatch(e, s) >= 0.5));
         return (loud.Count, recovered, entries.Length, spurious);
     }
+
+    /// <summary>One line per spurious confident entry: where it is, how loud and how certain, and its nearest injected
+    /// source and nearest other confident entry, so a failing run shows whether the spurious entries are split companions.</summary>
+    public IEnumerable<string> DescribeSpurious(IReadOnlyList<GalacticBinaryParameters> injected)
+    {
+        var entries = Catalogue.Build(0.5);
+        double MedianMatch(CatalogueEntry entry, GalacticBinaryParameters truth) =>
+            entry.Members.Select(m => _data.Match(m, truth)).Order().ElementAt(entry.Members.Length / 2);
+        foreach (var entry in entries)
+        {
+            double f = entry.Median.FrequencyHz;
+            var near = injected.Where(s => Math.Abs(s.FrequencyHz - f) < 40 * _data.DfHz).ToList();
+            if (near.Any(s => MedianMatch(entry, s) >= 0.5)) continue;
+            var truth = injected.MinBy(s => Math.Abs(s.FrequencyHz - f) / _data.DfHz - _data.Snr(s) / 10.0);
+            var neighbour = entries.Where(e => e != entry).MinBy(e => Math.Abs(e.Median.FrequencyHz - f));
+            yield return $"spurious f0 {f * 1e3:F6} mHz snr {entry.MedianSnr:F1} conf {entry.Confidence:F2} | nearest loud-weighted truth "
+                + $"{(truth.FrequencyHz - f) / _data.DfHz:+0.00;-0.00} bins snr {_data.Snr(truth):F1} match {MedianMatch(entry, truth):F2} | "
+                + $"neighbour entry {(neighbour is null ? double.NaN : (neighbour.Median.FrequencyHz - f) / _data.DfHz):+0.00;-0.00} bins "
+                + $"snr {neighbour?.MedianSnr:F1} conf {neighbour?.Confidence:F2} | injected within 4 bins: "
+                + string.Join(", ", injected.Where(s => Math.Abs(s.FrequencyHz - f) < 4 * _data.DfHz && _data.Snr(s) > 2)
+                    .Select(s => $"{(s.FrequencyHz - f) / _data.DfHz:+0.00;-0.00} bins snr {_data.Snr(s):F1} match {MedianMatch(entry, s):F2}"));
+        }
+    }
 }

@@ -6,37 +6,6 @@ namespace GlobalFit.Inference.Tests.Transdimensional;
 
 public sealed class ReversibleJumpTests
 {
-    private sealed class CountSink(long burnIn, int maxSources) : ITransdimensionalSampleSink
-    {
-        public List<int> Counts { get; } = [];
-
-        public List<double>[] MeanA { get; } = Enumerable.Range(0, maxSources + 1).Select(_ => new List<double>()).ToArray();
-
-        public List<double>[] MeanB { get; } = Enumerable.Range(0, maxSources + 1).Select(_ => new List<double>()).ToArray();
-
-        public void OnSample(long step, int replica, int sourceCount, ReadOnlySpan<double> sources, double logLikelihood, double logPrior)
-        {
-            if (step <= burnIn || replica != 0)
-            {
-                return;
-            }
-
-            Counts.Add(sourceCount);
-            if (sourceCount > 0)
-            {
-                double a = 0, b = 0;
-                for (int j = 0; j < sourceCount; j++)
-                {
-                    a += sources[2 * j];
-                    b += sources[2 * j + 1];
-                }
-
-                MeanA[sourceCount].Add(a / sourceCount);
-                MeanB[sourceCount].Add(b / sourceCount);
-            }
-        }
-    }
-
     [Fact]
     public void Reversible_jump_with_tempering_recovers_the_analytic_posterior_over_the_number_of_sources()
     {

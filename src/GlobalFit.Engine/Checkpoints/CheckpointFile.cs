@@ -33,16 +33,26 @@ public static class CheckpointFile
     {
         ArgumentNullException.ThrowIfNull(checkpoint);
         Directory.CreateDirectory(Folder(runFolder));
-        byte[] payload = MessagePackSerializer.Serialize(checkpoint, MessagePackSerializerOptions.Standard);
         string temporary = Path.Combine(Folder(runFolder), "latest.tmp");
         using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
         {
+            // The payload is serialised straight to the file behind a placeholder header, which is filled in once its
+            // length and digest are known: a checkpoint of thousands of workers is never held whole in memory.
+            stream.Write(new byte[HeaderBytes]);
+            byte[] digest;
+            long length;
+            using (var hashing = new HashingWriteStream(stream))
+            {
+                MessagePackSerializer.Serialize(hashing, checkpoint, MessagePackSerializerOptions.Standard);
+                digest = hashing.Digest();
+                length = hashing.Written;
+            }
             Span<byte> header = stackalloc byte[HeaderBytes];
             Magic.CopyTo(header);
-            BinaryPrimitives.WriteInt64LittleEndian(header[8..], payload.Length);
-            SHA256.HashData(payload, header[16..]);
+            BinaryPrimitives.WriteInt64LittleEndian(header[8..], length);
+            digest.CopyTo(header[16..]);
+            stream.Position = 0;
             stream.Write(header);
-            stream.Write(payload);
             stream.Flush(flushToDisk: true);
         }
         string latest = LatestPath(runFolder);

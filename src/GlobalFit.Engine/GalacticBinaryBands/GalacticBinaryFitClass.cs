@@ -21,7 +21,7 @@ public sealed class GalacticBinaryFitClass : IFitSourceClass
         ArgumentNullException.ThrowIfNull(shape);
         var generator = CreateGenerator(shape);
         var (settings, plan) = GalacticBinaryBandSettings.FromConfig(section, generator);
-        return new GalacticBinaryFitPlan(settings, plan, shape);
+        return new GalacticBinaryFitPlan(settings, plan, generator);
     }
 
     internal static GalacticBinaryTemplateGenerator CreateGenerator(FitDataShape shape) =>

@@ -3,6 +3,7 @@ using System.Globalization;
 using GlobalFit.Engine.Catalogue;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Physics.GalacticBinaries;
 using GlobalFit.Physics.Series;
 
 namespace GlobalFit.Engine.GalacticBinaryBands;
@@ -14,13 +15,15 @@ internal sealed class GalacticBinaryFitPlan : IFitSourceClassPlan
     private const string Prefix = GalacticBinaryFitClass.Id + "/";
     private readonly GalacticBinaryBandSettings _settings;
     private readonly GalacticBinaryBandPlan _plan;
-    private readonly FitDataShape _shape;
+    private readonly GalacticBinaryTemplateGenerator _prototype;
 
-    public GalacticBinaryFitPlan(GalacticBinaryBandSettings settings, GalacticBinaryBandPlan plan, FitDataShape shape)
+    // Every worker's generator comes from `prototype` through WithOwnBuffers, sharing its coarse geometry: a fit with a
+    // thousand windows holds that once instead of a thousand times.
+    public GalacticBinaryFitPlan(GalacticBinaryBandSettings settings, GalacticBinaryBandPlan plan, GalacticBinaryTemplateGenerator prototype)
     {
         _settings = settings;
         _plan = plan;
-        _shape = shape;
+        _prototype = prototype;
         Groups =
         [
             new WorkerGroup(GalacticBinaryFitClass.Id + ".even", [.. plan.Stage(0).Select(w => Describe(w, settings.IncludeT))]),
@@ -37,20 +40,20 @@ internal sealed class GalacticBinaryFitPlan : IFitSourceClassPlan
     public IFitWorker CreateWorker(string workerId, ulong runSeed)
     {
         var window = Window(workerId);
-        return new GalacticBinaryFitWorker(workerId, new GalacticBinaryBandWorker(_settings, window, GalacticBinaryFitClass.CreateGenerator(_shape), runSeed), WorkerIdOf);
+        return new GalacticBinaryFitWorker(workerId, new GalacticBinaryBandWorker(_settings, window, _prototype.WithOwnBuffers(), runSeed), WorkerIdOf);
     }
 
     public IFitWorker RestoreWorker(string workerId, ReadOnlyMemory<byte> state)
     {
         var window = Window(workerId);
-        return new GalacticBinaryFitWorker(workerId, GalacticBinaryBandWorker.Restore(_settings, window, GalacticBinaryFitClass.CreateGenerator(_shape), state), WorkerIdOf);
+        return new GalacticBinaryFitWorker(workerId, GalacticBinaryBandWorker.Restore(_settings, window, _prototype.WithOwnBuffers(), state), WorkerIdOf);
     }
 
     public IClassCatalogue CreateCatalogue(IPsdSource noise, long burnInIterations, double minimumConfidence)
     {
         var first = _plan.Windows[0].Padded;
         var last = _plan.Windows[^1].Padded;
-        return new GalacticBinaryClassCatalogue(GalacticBinaryFitClass.CreateGenerator(_shape), new BinWindow(first.First, last.End - first.First),
+        return new GalacticBinaryClassCatalogue(_prototype.WithOwnBuffers(), new BinWindow(first.First, last.End - first.First),
             noise, burnInIterations, minimumConfidence);
     }
 

@@ -85,8 +85,7 @@ public static class FitRunner
         NoiseWorker LoadNoise(byte[]? state) => state is null
             ? new NoiseWorker(plan.Noise, plan.Shape, settings.Seed)
             : NoiseWorker.Restore(plan.Noise, plan.Shape, state);
-        var initialNoise = LoadNoise(start.NoiseState);
-        var psd = InversePsd.From(initialNoise, plan.Shape.BinCount);
+        var (psd, noiseBins) = InitialNoise(LoadNoise(start.NoiseState), plan.Shape.BinCount);
         var book = new ResidualBook(data, plan.Workers.Select(w => (w.Id, w.Bins, w.IncludesT)), psd.A, psd.E, psd.T);
         foreach (var (id, template) in start.Templates) book.Replace(id, template);
         var progress = new StatusRecordingProgress(options.Progress, layout, start.CheckpointIteration);
@@ -100,7 +99,7 @@ public static class FitRunner
         var setup = new CoordinatorSetup(plan, digest, start.Iteration, start.CheckpointIteration, start.WorkerStates, start.Templates, start.NoiseState,
             residual, store, checkpointer, progress,
             (id, state) => state is null ? plan.ClassOf(id).CreateWorker(id, settings.Seed) : plan.ClassOf(id).RestoreWorker(id, state),
-            NoiseActor.Props(LoadNoise, plan.Shape.BinCount), initialNoise.Bins, plan.Noise.StepsPerUpdate);
+            NoiseActor.Props(LoadNoise, plan.Shape.BinCount), noiseBins, plan.Noise.StepsPerUpdate);
         var coordinator = system.ActorOf(FitCoordinator.Props(setup), "fit-coordinator");
         using var stop = options.Cancellation.Register(() => coordinator.Tell(new StopFit()));
         var finished = coordinator.Ask<FitFinished>(new StartFit(), Timeout.InfiniteTimeSpan).GetAwaiter().GetResult();
@@ -110,6 +109,11 @@ public static class FitRunner
         if (outcome.Kind == FitOutcomeKind.Completed) RunCatalogue.Export(plan, layout, options.Progress.Warning);
         return outcome;
     }
+
+    // The starting PSD and band from a throw-away noise worker (the noise actor builds its own), so that this one's
+    // per-bin arrays are not held for the whole run.
+    private static (InversePsd Psd, Physics.Series.BinWindow Bins) InitialNoise(NoiseWorker worker, int binCount) =>
+        (InversePsd.From(worker, binCount), worker.Bins);
 
     private static FitData LoadData(RunPlan plan, IFitProgress progress)
     {

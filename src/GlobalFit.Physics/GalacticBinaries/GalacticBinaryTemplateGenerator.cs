@@ -87,6 +87,28 @@ public sealed class GalacticBinaryTemplateGenerator
         for (int i = 0; i < count; i++) FftPlan.ForLength(LengthRule.MinimumLength << i);
     }
 
+    // A generator for the same record that shares `source`'s coarse geometry (immutable after construction) and owns
+    // new scratch buffers.
+    private GalacticBinaryTemplateGenerator(GalacticBinaryTemplateGenerator source)
+    {
+        Orbits = source.Orbits;
+        LengthRule = source.LengthRule;
+        SampleCount = source.SampleCount;
+        CadenceSeconds = source.CadenceSeconds;
+        DurationSeconds = source.DurationSeconds;
+        StartSeconds = source.StartSeconds;
+        _minimumLengthLog2 = source._minimumLengthLog2;
+        _geometries = source._geometries;
+        _a = new Complex[source._a.Length];
+        _e = new Complex[source._e.Length];
+        _t = new Complex[source._t.Length];
+    }
+
+    /// <summary>A generator for the same record with scratch buffers of its own, for another thread or worker.</summary>
+    /// <remarks>The coarse constellation geometry (about 1.4 MB for the default envelope lengths) is shared rather than
+    /// recomputed, so a fit with a thousand band workers holds it once; the copy allocates only its three buffers.</remarks>
+    public GalacticBinaryTemplateGenerator WithOwnBuffers() => new(this);
+
     /// <summary>The constellation.</summary>
     public IConstellationOrbits Orbits { get; }
 

@@ -1,67 +1,21 @@
 using System.Diagnostics;
 using System.Text.Json;
 using GlobalFit.Cli.Tests.Support;
+using GlobalFit.Tests.Shared;
 
 namespace GlobalFit.Cli.Tests.Commands;
 
 /// <summary>The fit commands driven as separate processes, as a user's shell (or a cluster's scheduler) would.</summary>
 public class FitProcessTests
 {
-    private const string Scenario = """
-        name = "two loud binaries"
-        seed = 31
-        [observation]
-        duration_days = 30
-        cadence_s = 15
-        [noise.foreground]
-        enabled = true
-        fit_years = 1
-        [[galactic_binaries.binary]]
-        id = "loud-a"
-        f0_hz = 2.9712e-3
-        amp = 3e-22
-        beta_rad = 0.4
-        lambda_rad = 1.2
-        iota_rad = 0.8
-        [[galactic_binaries.binary]]
-        id = "loud-b"
-        f0_hz = 3.0305e-3
-        amp = 2e-22
-        beta_rad = -0.7
-        lambda_rad = 4.0
-        iota_rad = 1.4
-        """;
-
-    private static string Config(string data, string run) => $$"""
-        data = "{{data}}"
-        run_folder = "{{run}}"
-        seed = 5
-        iterations = 10
-        burn_in = 4
-        checkpoint_every = 1
-        threads = 2
-        [galactic_binaries]
-        f_min_hz = 2.95e-3
-        f_max_hz = 3.05e-3
-        window_bins = 128
-        padding_bins = 48
-        steps_per_update = 300
-        temperatures = 3
-        max_sources_per_window = 6
-        fstat_cells_per_bin = 1
-        fstat_latitude_cells = 4
-        fstat_longitude_cells = 8
-        [noise]
-        steps_per_update = 30
-        foreground_fit_years = 1
-        """;
+    private static string Config(string data, string run) => SmallFitRecord.FitConfig(data, run, iterations: 10, threads: 2, stepsPerUpdate: 300);
 
     [Fact]
     public void A_fit_killed_after_five_iterations_and_resumed_ends_with_the_same_catalogue_bytes_as_an_uninterrupted_fit()
     {
         using var folder = new TempFolder();
         string data = folder.File("data.h5");
-        Assert.Equal(0, CliRun.Run("simulate", folder.Write("scenario.toml", Scenario), "--out", data).ExitCode);
+        Assert.Equal(0, CliRun.Run("simulate", folder.Write("scenario.toml", SmallFitRecord.Scenario), "--out", data).ExitCode);
         string straightRun = folder.File("straight"), killedRun = folder.File("killed");
 
         var straight = Globalfit.Run("fit", folder.Write("straight.toml", Config(data, straightRun)));
@@ -85,7 +39,7 @@ public class FitProcessTests
 
         var catalogue = CliRun.Run("catalogue", killedRun, "--format", "json");
         Assert.Equal(0, catalogue.ExitCode);
-        Assert.True(JsonDocument.Parse(catalogue.Out).RootElement.GetProperty("entries").GetArrayLength() >= 2);
+        Assert.True(JsonDocument.Parse(catalogue.Out).RootElement.GetProperty("entries").GetArrayLength() >= 3);
         var trace = CliRun.Run("trace", killedRun, "--json");
         Assert.Equal(0, trace.ExitCode);
     }
@@ -95,7 +49,7 @@ public class FitProcessTests
     {
         using var folder = new TempFolder();
         string data = folder.File("data.h5");
-        Assert.Equal(0, CliRun.Run("simulate", folder.Write("scenario.toml", Scenario), "--out", data).ExitCode);
+        Assert.Equal(0, CliRun.Run("simulate", folder.Write("scenario.toml", SmallFitRecord.Scenario), "--out", data).ExitCode);
         string run = folder.File("run");
         using var fit = Globalfit.Start("fit", folder.Write("fit.toml", Config(data, run).Replace("checkpoint_every = 1", "checkpoint_every = 100", StringComparison.Ordinal)));
         WaitForIteration(run, 2, fit, TimeSpan.FromMinutes(5));

@@ -3,6 +3,8 @@ using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Tests.Catalogue;
 using GlobalFit.Physics.Input;
 
+using GlobalFit.Tests.Shared;
+
 namespace GlobalFit.Engine.Tests.Runs;
 
 /// <summary>Whole fits through <see cref="FitRunner"/>: the real actors, workers, noise model, store and checkpoints on a
@@ -73,15 +75,15 @@ public sealed class FitRunTests(SharedFitData data) : IClassFixture<SharedFitDat
         double df = plan.Shape.DfHz;
         // Two bins: over a month the f0 posterior of an SNR ≥ 20 binary is a small fraction of a bin wide, and the
         // sky/f0 degeneracy moves f0 by at most the orbital Doppler shift (1e-4 f0 ≈ 0.8 bin here).
-        foreach (double f0 in new[] { 2.9712e-3, 2.9911e-3, 3.0305e-3 })
+        foreach (double f0 in SmallFitRecord.BinaryFrequenciesHz)
             Assert.Contains(entries, e => Math.Abs(e.Median[e.ParameterNames.IndexOf("f0_hz")] - f0) < 2 * df && e.Confidence >= 0.5);
-        Assert.All(entries, e => Assert.Contains(new[] { 2.9712e-3, 2.9911e-3, 3.0305e-3 }, f0 => Math.Abs(e.Median[e.ParameterNames.IndexOf("f0_hz")] - f0) < 2 * df));
+        Assert.All(entries, e => Assert.Contains(SmallFitRecord.BinaryFrequenciesHz, f0 => Math.Abs(e.Median[e.ParameterNames.IndexOf("f0_hz")] - f0) < 2 * df));
 
         var noise = NoiseSamples.After(layout, plan.Settings.BurnIn);
         // The levels are known to ~0.1 % from ~10⁵ bins, so 3σ (σ from the stored post-burn-in samples, floored at 0.5 %
         // for the few samples a short run keeps) is a tight test; the start was 20 % away.
-        NoiseSamples.AssertWithin(noise, "acc_ae", FitRunFixture.InjectedAccelerationAsd);
-        NoiseSamples.AssertWithin(noise, "oms_ae", FitRunFixture.InjectedOmsAsd);
+        NoiseSamples.AssertWithin(noise, "acc_ae", SmallFitRecord.InjectedAccelerationAsd);
+        NoiseSamples.AssertWithin(noise, "oms_ae", SmallFitRecord.InjectedOmsAsd);
     }
 
     [Fact]
@@ -101,7 +103,7 @@ public sealed class FitRunTests(SharedFitData data) : IClassFixture<SharedFitDat
     private string WriteConfig(TemporaryRunFolder folder, string run, int iterations, int threads, string? name = null)
     {
         string path = folder.File(name ?? run + ".toml");
-        File.WriteAllText(path, FitRunFixture.FitConfig(data.DataPath, folder.File(run), iterations, threads));
+        File.WriteAllText(path, SmallFitRecord.FitConfig(data.DataPath, folder.File(run), iterations, threads));
         return path;
     }
 

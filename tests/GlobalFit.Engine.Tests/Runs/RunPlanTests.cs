@@ -3,6 +3,8 @@ using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Tests.Catalogue;
 using GlobalFit.Physics.Input;
 
+using GlobalFit.Tests.Shared;
+
 namespace GlobalFit.Engine.Tests.Runs;
 
 /// <summary>A run configuration that cannot work is refused before anything starts, naming the key and its place.</summary>
@@ -72,7 +74,7 @@ public sealed class RunPlanTests(SharedFitData data) : IClassFixture<SharedFitDa
     private RunPlan Plan(string rootOverrides, string gbOverrides = "", string extra = "")
     {
         using var folder = new TemporaryRunFolder();
-        string text = rootOverrides + FitRunFixture.FitConfig(data.DataPath, folder.File("run"), 4, 1) + "\n" + extra;
+        string text = rootOverrides + SmallFitRecord.FitConfig(data.DataPath, folder.File("run"), 4, 1) + "\n" + extra;
         // An override replaces the fixture's line for the same key.
         foreach (string line in gbOverrides.Split('\n', StringSplitOptions.RemoveEmptyEntries))
             text = System.Text.RegularExpressions.Regex.Replace(text, "(?m)^" + line.Split(' ')[0] + " = .*$", line);

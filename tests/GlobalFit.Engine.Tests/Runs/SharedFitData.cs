@@ -1,5 +1,7 @@
 using GlobalFit.Engine.Tests.Catalogue;
 
+using GlobalFit.Tests.Shared;
+
 namespace GlobalFit.Engine.Tests.Runs;
 
 /// <summary>The loud-binaries record, simulated once for all end-to-end fit tests.</summary>
@@ -10,7 +12,7 @@ public sealed class SharedFitData : IDisposable
     public SharedFitData()
     {
         DataPath = _folder.File("loud.h5");
-        FitRunFixture.Simulate(FitRunFixture.LoudBinariesScenario, DataPath);
+        FitRunFixture.Simulate(SmallFitRecord.Scenario, DataPath);
     }
 
     public string DataPath { get; }

@@ -17,8 +17,9 @@ public class GalacticBinaryRecoveryTests(ITestOutputHelper output)
     // split/merge moves the pair rarely collapses within a short run. Measured over driver seeds 1, 2, 3, 99: 4/4
     // recovered each time; 1–3 companions among 5–7 confident entries. Runtime ~10 s on the shared 2-core machine.
     // Known failure mode, seen after the adaptive proposals changed (seed 99): the SNR-50 source is split into two
-    // confident entries 0.5 bins apart (SNR 35 and 41), neither matching the truth at 0.9. Split/merge moves are
-    // what would repair it; until then this test asserts that every loud source is detected (a confident entry
+    // confident entries 0.5 bins apart (SNR 35 and 41), neither matching the truth at 0.9. Split/merge moves exist now
+    // but are seldom accepted for such pairs (0.1–0.2 % of cold-chain proposals in the full-band run), so this test
+    // still asserts that every loud source is detected (a confident entry
     // within one template length), that at least three of the four are recovered at match ≥ 0.9, and that no
     // entry comes from noise alone.
     [Fact]

@@ -17,8 +17,9 @@ public class GalacticBinaryRecoveryTests(ITestOutputHelper output)
     // split/merge moves the pair rarely collapses within a short run. Measured over driver seeds 1, 2, 3, 99: 4/4
     // recovered each time; 1–3 companions among 5–7 confident entries. Runtime ~10 s on the shared 2-core machine.
     // Known failure mode, seen after the adaptive proposals changed (seed 99): the SNR-50 source is split into two
-    // confident entries 0.5 bins apart (SNR 35 and 41), neither matching the truth at 0.9. Split/merge moves are
-    // what would repair it; until then this test asserts that every loud source is detected (a confident entry
+    // confident entries 0.5 bins apart (SNR 35 and 41), neither matching the truth at 0.9. Split/merge moves exist now
+    // but are seldom accepted for such pairs (0.1–0.2 % of cold-chain proposals in the full-band run), so this test
+    // still asserts that every loud source is detected (a confident entry
     // within one template length), that at least three of the four are recovered at match ≥ 0.9, and that no
     // entry comes from noise alone.
     [Fact]
@@ -63,9 +64,13 @@ public class GalacticBinaryRecoveryTests(ITestOutputHelper output)
     // spurious (8.8 %), 158 s, with the first adaptive proposals; with the later ones 48/50 recovered and 8/65 spurious
     // (12.3 %), mostly companions patching the misfit of a loud source. With split/merge moves added 48/50 and 8/68;
     // with the birth-density jump as well 48/50 and 7/64; with the backfitted starting search as well 48/50 and 6/62
-    // (9.7 %), 114 s. The target is met, narrowly: three of the six remaining spurious entries still patch loud
-    // sources (one of them two loud binaries 1.3 bins apart fitted as one), and the others are SNR 3–5 fits to the
-    // weak population. The lines printed after the summary describe each spurious entry.
+    // (9.7 %), 114 s: met, narrowly; three of those six still patched loud sources (one of them two loud binaries 1.3 bins
+    // apart fitted as one) and the others were SNR 3–5 fits to the weak population. The ziggurat Gaussian generator then
+    // changed the noise realisation: 48/50 recovered and 9/67 spurious (13.4 %), 128 s, of which seven are SNR 3–4.5
+    // entries with no injected source above SNR 2 within 4 bins (blends of the weak population or noise, which the
+    // likelihood's instrument-only PSD does not model) and two are companions of one SNR-92 source. With about 65
+    // confident entries the spurious count moves by ±2–3 between realisations, so the ≤ 10 % target is NOT reliably met.
+    // The lines printed after the summary describe each spurious entry.
     [Fact]
     [Trait("Category", "Long")]
     public void Full_band_recovery_finds_nine_tenths_of_loud_binaries_with_few_spurious_entries()

@@ -138,7 +138,9 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
     {
         var key = new SourceKey(values);
         if (_cache.TryGetValue(key, out var cached)) return cached;
-        var template = _pool.Count > 0 ? _pool.Pop() : new CachedTemplate(_generator.MaximumEnvelopeLength);
+        // A cached template holds only its overlap with the band, so the band's width bounds it (a year-long template
+        // can be 4096 bins; a band window is a few hundred).
+        var template = _pool.Count > 0 ? _pool.Pop() : new CachedTemplate(Math.Min(_generator.MaximumEnvelopeLength, _band.Window.Count), _band.IncludesT);
         var view = _generator.Render(GalacticBinarySourceVector.ToParameters(values, SnrScale), _band.IncludesT);
         var overlap = _band.Window.Intersect(new BinWindow(view.FirstBin, view.Count));
         template.Offset = overlap.First - _band.Window.First;
@@ -207,11 +209,11 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
         _cache.Clear();
     }
 
-    private sealed class CachedTemplate(int capacity)
+    private sealed class CachedTemplate(int capacity, bool includeT)
     {
         public Complex[] A { get; } = new Complex[capacity];
         public Complex[] E { get; } = new Complex[capacity];
-        public Complex[] T { get; } = new Complex[capacity];
+        public Complex[] T { get; } = includeT ? new Complex[capacity] : [];
         public int Offset { get; set; }
         public int Count { get; set; }
         public double DataOverlap { get; set; }

@@ -31,15 +31,15 @@ namespace GlobalFit.Engine.GalacticBinaryBands;
 /// a worker restored from it and given the same residual and step count produces the same result bit for bit (only
 /// <see cref="GalacticBinaryBandStatistics.WallTime"/> differs). Every update, fresh or restored, goes through the same
 /// save/resume path, so there is no second code path to diverge.</para>
-/// <para>Knows nothing about actors or threads; not thread-safe. Owns its template generator exclusively.</para>
+/// <para>Knows nothing about actors or threads; not thread-safe. Borrows a template generator and F-statistic from a
+/// <see cref="GalacticBinaryToolPool"/> for each call, so many workers can share a few.</para>
 /// </remarks>
 public sealed class GalacticBinaryBandWorker
 {
     private const double MapUniformFraction = 0.1;
 
     private readonly GalacticBinaryBandSettings _settings;
-    private readonly GalacticBinaryTemplateGenerator _generator;
-    private readonly FStatistic _statistic;
+    private readonly GalacticBinaryToolPool _tools;
     private readonly GalacticBinarySourcePrior _prior;
     private GalacticBinaryBandWorkerState _state;
 
@@ -49,18 +49,27 @@ public sealed class GalacticBinaryBandWorker
     /// <param name="generator">A template generator for the data record, used by this worker only.</param>
     /// <param name="seed">The run seed; the window index separates the workers' random streams.</param>
     public GalacticBinaryBandWorker(GalacticBinaryBandSettings settings, GalacticBinaryBandWindow window, GalacticBinaryTemplateGenerator generator, ulong seed)
-        : this(settings, window, generator, new GalacticBinaryBandWorkerState(window?.Index ?? 0, 0.0, 0, seed, null))
+        : this(settings, window, new GalacticBinaryToolPool(generator), seed)
     {
     }
 
-    private GalacticBinaryBandWorker(GalacticBinaryBandSettings settings, GalacticBinaryBandWindow window, GalacticBinaryTemplateGenerator generator, GalacticBinaryBandWorkerState state)
+    /// <summary>Creates a worker with no sources yet that borrows its generator from <paramref name="tools"/>.</summary>
+    /// <param name="settings">The galactic-binary settings.</param>
+    /// <param name="window">The plan entry it samples.</param>
+    /// <param name="tools">Generators for the data record, shared with other workers.</param>
+    /// <param name="seed">The run seed; the window index separates the workers' random streams.</param>
+    public GalacticBinaryBandWorker(GalacticBinaryBandSettings settings, GalacticBinaryBandWindow window, GalacticBinaryToolPool tools, ulong seed)
+        : this(settings, window, tools, new GalacticBinaryBandWorkerState(window?.Index ?? 0, 0.0, 0, seed, null))
+    {
+    }
+
+    private GalacticBinaryBandWorker(GalacticBinaryBandSettings settings, GalacticBinaryBandWindow window, GalacticBinaryToolPool tools, GalacticBinaryBandWorkerState state)
     {
         _settings = settings ?? throw new ArgumentNullException(nameof(settings));
         Window = window ?? throw new ArgumentNullException(nameof(window));
-        _generator = generator ?? throw new ArgumentNullException(nameof(generator));
-        if (Math.Abs(generator.FrequencyResolutionHz - window.DfHz) > 1e-9 * window.DfHz)
-            throw new ArgumentException("the generator's bin spacing differs from the window's", nameof(generator));
-        _statistic = new FStatistic(generator);
+        _tools = tools ?? throw new ArgumentNullException(nameof(tools));
+        if (Math.Abs(tools.FrequencyResolutionHz - window.DfHz) > 1e-9 * window.DfHz)
+            throw new ArgumentException("the generator's bin spacing differs from the window's", nameof(tools));
         _prior = new GalacticBinarySourcePrior(window.SourceStartHz, window.SourceEndHz, settings.MinFrequencyDerivativeHzS,
             settings.MaxFrequencyDerivativeHzS, new SnrAmplitudePrior(settings.SnrPriorPeak, settings.SnrMax));
         _state = state;
@@ -73,13 +82,23 @@ public sealed class GalacticBinaryBandWorker
     /// <param name="state">The saved bytes.</param>
     /// <returns>The worker, ready to continue.</returns>
     /// <exception cref="ArgumentException">The state belongs to another window.</exception>
-    public static GalacticBinaryBandWorker Restore(GalacticBinaryBandSettings settings, GalacticBinaryBandWindow window, GalacticBinaryTemplateGenerator generator, ReadOnlyMemory<byte> state)
+    public static GalacticBinaryBandWorker Restore(GalacticBinaryBandSettings settings, GalacticBinaryBandWindow window, GalacticBinaryTemplateGenerator generator, ReadOnlyMemory<byte> state) =>
+        Restore(settings, window, new GalacticBinaryToolPool(generator), state);
+
+    /// <summary>Recreates a worker from <see cref="SaveState"/> bytes, borrowing its generator from <paramref name="tools"/>.</summary>
+    /// <param name="settings">The settings of the original worker.</param>
+    /// <param name="window">Its plan entry.</param>
+    /// <param name="tools">Generators for the same data record.</param>
+    /// <param name="state">The saved bytes.</param>
+    /// <returns>The worker, ready to continue.</returns>
+    /// <exception cref="ArgumentException">The state belongs to another window.</exception>
+    public static GalacticBinaryBandWorker Restore(GalacticBinaryBandSettings settings, GalacticBinaryBandWindow window, GalacticBinaryToolPool tools, ReadOnlyMemory<byte> state)
     {
         ArgumentNullException.ThrowIfNull(window);
         var saved = MessagePackSerializer.Deserialize<GalacticBinaryBandWorkerState>(state, MessagePackSerializerOptions.Standard);
         if (saved.WindowIndex != window.Index)
             throw new ArgumentException($"state of window {saved.WindowIndex} given to window {window.Index}", nameof(state));
-        return new GalacticBinaryBandWorker(settings, window, generator, saved);
+        return new GalacticBinaryBandWorker(settings, window, tools, saved);
     }
 
     /// <summary>The window this worker samples.</summary>
@@ -114,23 +133,26 @@ public sealed class GalacticBinaryBandWorker
         if (Math.Abs(residual.DfHz - Window.DfHz) > 1e-9 * Window.DfHz)
             throw new ArgumentException("residual bin spacing differs from the window's", nameof(residual));
         var clock = Stopwatch.StartNew();
+        using var tools = _tools.Rent();
+        var generator = tools.Generator;
+        var statistic = tools.Statistic;
         double snrScale = _state.SnrScale > 0
             ? _state.SnrScale
-            : GalacticBinaryBandModel.AverageSnrPerUnitAmplitude(_generator, residual, 0.5 * (Window.CoreStartHz + Window.CoreEndHz));
+            : GalacticBinaryBandModel.AverageSnrPerUnitAmplitude(generator, residual, 0.5 * (Window.CoreStartHz + Window.CoreEndHz));
         int chains = _settings.TemperatureCount * _settings.ChainsPerTemperature;
-        var model = new GalacticBinaryBandModel(_generator, _prior, residual, snrScale, _settings.MaxSourcesPerWindow,
+        var model = new GalacticBinaryBandModel(generator, _prior, residual, snrScale, _settings.MaxSourcesPerWindow,
             4 * chains * _settings.MaxSourcesPerWindow + 256);
         // Births and the starting search cover the core only: a source enters a drift margin only by moving there, and is
         // handed to the neighbour that owns it; were births allowed in the margins, two windows would fit the same signal.
         var grid = FStatisticGrid.ForWindow(Window.Core, Window.DfHz, _settings.FStatisticCellsPerBin,
             _settings.MinFrequencyDerivativeHzS, _settings.MaxFrequencyDerivativeHzS, 1,
             _settings.FStatisticLatitudeCells, _settings.FStatisticLongitudeCells);
-        var map = new FStatisticCellDensity(FStatisticMap.Compute(_statistic, residual, grid), MapUniformFraction);
-        var birth = new GalacticBinaryBirthDensity(_statistic, residual, map, snrScale);
-        var fisher = new GalacticBinarySourceFisher(_generator, residual, snrScale, _prior.Schema);
+        var map = new FStatisticCellDensity(FStatisticMap.Compute(statistic, residual, grid), MapUniformFraction);
+        var birth = new GalacticBinaryBirthDensity(statistic, residual, map, snrScale);
+        var fisher = new GalacticBinarySourceFisher(generator, residual, snrScale, _prior.Schema);
         var samplerSettings = SamplerSettings(fisher, birth);
         var start = _state.Sampler ?? Seeded(new ReversibleJumpSampler<GalacticBinaryBandModel>(model, birth, samplerSettings).CaptureState(),
-            GreedyFStatisticSearch.Run(_statistic, residual, grid, _settings.MaxSourcesPerWindow), snrScale);
+            GreedyFStatisticSearch.Run(statistic, residual, grid, _settings.MaxSourcesPerWindow), snrScale);
         var sampler = ReversibleJumpSampler<GalacticBinaryBandModel>.Resume(model, birth, samplerSettings, Rescored(start, model));
         var collector = new SampleCollector(_settings.SampleInterval, snrScale);
         sampler.Advance(steps, collector);
@@ -139,7 +161,7 @@ public sealed class GalacticBinaryBandWorker
         clock.Stop();
         var statistics = new GalacticBinaryBandStatistics(steps, sampler.Step, sampler.SourceCount(0), sampler.LogLikelihood(0),
             clock.Elapsed, sampler.GetStatistics());
-        return new GalacticBinaryBandUpdate(Window.Index, CurrentTemplate(), collector.Samples.ToImmutable(), statistics);
+        return new GalacticBinaryBandUpdate(Window.Index, Template(generator), collector.Samples.ToImmutable(), statistics);
     }
 
     /// <summary>The sources of the first cold chain now.</summary>
@@ -153,10 +175,16 @@ public sealed class GalacticBinaryBandWorker
     /// again after <see cref="TakeDriftedSources"/> or <see cref="Adopt"/>, which change the sources.</summary>
     public GalacticBinaryWindowTemplate CurrentTemplate()
     {
+        using var tools = _tools.Rent();
+        return Template(tools.Generator);
+    }
+
+    private GalacticBinaryWindowTemplate Template(GalacticBinaryTemplateGenerator generator)
+    {
         var a = new Complex[Window.Padded.Count];
         var e = new Complex[Window.Padded.Count];
         var t = _settings.IncludeT ? new Complex[Window.Padded.Count] : null;
-        foreach (var source in CurrentSources()) _generator.AddResponse(source, Window.Padded, a, e, t);
+        foreach (var source in CurrentSources()) generator.AddResponse(source, Window.Padded, a, e, t);
         return new GalacticBinaryWindowTemplate(Window.Padded, a, e, t);
     }
 

@@ -16,14 +16,16 @@ internal sealed class GalacticBinaryFitPlan : IFitSourceClassPlan
     private readonly GalacticBinaryBandSettings _settings;
     private readonly GalacticBinaryBandPlan _plan;
     private readonly GalacticBinaryTemplateGenerator _prototype;
+    private readonly GalacticBinaryToolPool _tools;
 
-    // Every worker's generator comes from `prototype` through WithOwnBuffers, sharing its coarse geometry: a fit with a
-    // thousand windows holds that once instead of a thousand times.
+    // Workers borrow generators from one pool built on `prototype` (sharing its coarse geometry), so a fit of a thousand
+    // windows holds as many generators as threads compute at once, not a thousand.
     public GalacticBinaryFitPlan(GalacticBinaryBandSettings settings, GalacticBinaryBandPlan plan, GalacticBinaryTemplateGenerator prototype)
     {
         _settings = settings;
         _plan = plan;
         _prototype = prototype;
+        _tools = new GalacticBinaryToolPool(prototype.WithOwnBuffers());
         Groups =
         [
             new WorkerGroup(GalacticBinaryFitClass.Id + ".even", [.. plan.Stage(0).Select(w => Describe(w, settings.IncludeT))]),
@@ -40,13 +42,13 @@ internal sealed class GalacticBinaryFitPlan : IFitSourceClassPlan
     public IFitWorker CreateWorker(string workerId, ulong runSeed)
     {
         var window = Window(workerId);
-        return new GalacticBinaryFitWorker(workerId, new GalacticBinaryBandWorker(_settings, window, _prototype.WithOwnBuffers(), runSeed), WorkerIdOf);
+        return new GalacticBinaryFitWorker(workerId, new GalacticBinaryBandWorker(_settings, window, _tools, runSeed), WorkerIdOf);
     }
 
     public IFitWorker RestoreWorker(string workerId, ReadOnlyMemory<byte> state)
     {
         var window = Window(workerId);
-        return new GalacticBinaryFitWorker(workerId, GalacticBinaryBandWorker.Restore(_settings, window, _prototype.WithOwnBuffers(), state), WorkerIdOf);
+        return new GalacticBinaryFitWorker(workerId, GalacticBinaryBandWorker.Restore(_settings, window, _tools, state), WorkerIdOf);
     }
 
     public IClassCatalogue CreateCatalogue(IPsdSource noise, long burnInIterations, double minimumConfidence)

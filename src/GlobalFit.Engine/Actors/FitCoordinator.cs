@@ -37,6 +37,7 @@ public sealed class FitCoordinator : ReceiveActor
     private readonly List<SampleBlock> _iterationBlocks = [];
     private readonly List<(string WorkerId, double ComputeMs)> _slowest = [];
     private readonly Dictionary<string, WorkerStatistics> _latestStatistics = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, double> _lastComputeMs = new(StringComparer.Ordinal);
     private IActorRef _noise = ActorRefs.Nobody;
     private IActorRef? _requester;
     private byte[]? _noiseCommitted;
@@ -135,11 +136,12 @@ public sealed class FitCoordinator : ReceiveActor
         _stageCompute.Clear();
         _stageNoise = null;
         _outstanding.Clear();
-        foreach (string group in groups)
-        {
-            if (group == FitSchedule.NoiseGroup) Serve(NoiseId);
-            else foreach (var worker in _plan.GroupWorkers(group)) Serve(worker.Id);
-        }
+        // Longest first (by each worker's compute time in its last update): the compute threads take requests in the
+        // order they are sent, so the stage does not end with one long update running alone. Only the order of work
+        // changes, never its inputs, so results are unaffected.
+        var members = groups.SelectMany(g => g == FitSchedule.NoiseGroup ? [NoiseId] : _plan.GroupWorkers(g).Select(w => w.Id));
+        foreach (string id in members.OrderByDescending(id => _lastComputeMs.GetValueOrDefault(id)).ThenBy(id => id, StringComparer.Ordinal))
+            Serve(id);
     }
 
     private void Serve(string id)
@@ -160,7 +162,7 @@ public sealed class FitCoordinator : ReceiveActor
     {
         if (_finished || !_outstanding.Remove(message.WorkerId)) return;
         _stageResults[message.WorkerId] = message;
-        _stageCompute[message.WorkerId] = message.Update.Statistics.WallTime.TotalMilliseconds;
+        _stageCompute[message.WorkerId] = _lastComputeMs[message.WorkerId] = message.Update.Statistics.WallTime.TotalMilliseconds;
         _latestStatistics[message.WorkerId] = message.Update.Statistics;
         if (_outstanding.Count == 0) RouteHandovers();
     }
@@ -169,7 +171,7 @@ public sealed class FitCoordinator : ReceiveActor
     {
         if (_finished || !_outstanding.Remove(NoiseId)) return;
         _stageNoise = message;
-        _stageCompute[NoiseId] = message.Statistics.WallTime.TotalMilliseconds;
+        _stageCompute[NoiseId] = _lastComputeMs[NoiseId] = message.Statistics.WallTime.TotalMilliseconds;
         _latestStatistics[NoiseId] = message.Statistics;
         if (_outstanding.Count == 0) RouteHandovers();
     }

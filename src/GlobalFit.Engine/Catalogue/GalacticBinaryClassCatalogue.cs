@@ -41,10 +41,11 @@ public sealed class GalacticBinaryClassCatalogue : IClassCatalogue
     /// <param name="burnInIterations">Blocks of iterations 1 … this are ignored.</param>
     /// <param name="minimumConfidence">Entries present in a smaller fraction of samples are left out, in [0, 1].</param>
     /// <param name="matchThreshold">The association overlap threshold of <see cref="CatalogueBuilder"/>.</param>
+    /// <param name="minimumSnr">Entries whose median SNR lies below this are left out.</param>
     /// <exception cref="ArgumentOutOfRangeException">The burn-in is negative, the confidence outside [0, 1], or the noise
     /// PSD not positive and finite over the bins.</exception>
     public GalacticBinaryClassCatalogue(GalacticBinaryTemplateGenerator generator, BinWindow bins, IPsdSource noise,
-        long burnInIterations = 0, double minimumConfidence = 0.0, double matchThreshold = 0.5)
+        long burnInIterations = 0, double minimumConfidence = 0.0, double matchThreshold = 0.5, double minimumSnr = 0.0)
     {
         ArgumentNullException.ThrowIfNull(generator);
         ArgumentNullException.ThrowIfNull(noise);
@@ -57,6 +58,7 @@ public sealed class GalacticBinaryClassCatalogue : IClassCatalogue
         _matchThreshold = matchThreshold;
         BurnInIterations = burnInIterations;
         MinimumConfidence = minimumConfidence;
+        MinimumSnr = minimumSnr;
         // Checks the threshold and the weights once, before any block arrives.
         _ = new CatalogueBuilder(generator, bins, _inverseA, _inverseE, matchThreshold);
     }
@@ -66,6 +68,9 @@ public sealed class GalacticBinaryClassCatalogue : IClassCatalogue
 
     /// <summary>Entries below this confidence are left out.</summary>
     public double MinimumConfidence { get; }
+
+    /// <summary>Entries whose median SNR lies below this are left out.</summary>
+    public double MinimumSnr { get; }
 
     /// <summary>Adds each sample of <paramref name="block"/> to its worker's builder, unless the block is burn-in.</summary>
     /// <param name="block">A galactic-binary worker's block: the eight columns of
@@ -99,7 +104,7 @@ public sealed class GalacticBinaryClassCatalogue : IClassCatalogue
     /// <returns>The records; parameters are the eight columns of <see cref="GalacticBinaryParameters.ColumnNames"/>.</returns>
     public ImmutableArray<CatalogueRecord> Build()
     {
-        var entries = _builders.Values.SelectMany(b => b.Build(MinimumConfidence)).OrderBy(e => e.Median.FrequencyHz).ToList();
+        var entries = _builders.Values.SelectMany(b => b.Build(MinimumConfidence, MinimumSnr)).OrderBy(e => e.Median.FrequencyHz).ToList();
         int digits = Math.Max(4, entries.Count.ToString(CultureInfo.InvariantCulture).Length);
         var records = ImmutableArray.CreateBuilder<CatalogueRecord>(entries.Count);
         for (int i = 0; i < entries.Count; i++)

@@ -106,8 +106,9 @@ public sealed class CatalogueBuilder
 
     /// <summary>The entries so far, by median f0.</summary>
     /// <param name="minimumConfidence">Entries below this confidence are left out; default 0 (all).</param>
-    public ImmutableArray<CatalogueEntry> Build(double minimumConfidence = 0.0) =>
-        [.. _entries.Select(Summarise).Where(e => e.Confidence >= minimumConfidence).OrderBy(e => e.Median.FrequencyHz)];
+    /// <param name="minimumSnr">Entries whose median SNR lies below this are left out; default 0 (all).</param>
+    public ImmutableArray<CatalogueEntry> Build(double minimumConfidence = 0.0, double minimumSnr = 0.0) =>
+        [.. _entries.Select(Summarise).Where(e => e.Confidence >= minimumConfidence && e.MedianSnr >= minimumSnr).OrderBy(e => e.Median.FrequencyHz)];
 
     private CatalogueEntry Summarise(Entry entry)
     {

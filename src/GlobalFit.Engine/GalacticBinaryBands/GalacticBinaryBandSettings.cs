@@ -16,7 +16,7 @@ public sealed record GalacticBinaryBandSettings
         "f_min_hz", "f_max_hz", "window_bins", "padding_bins", "max_sources_per_window", "fdot_min_hz_s", "fdot_max_hz_s",
         "steps_per_update", "temperatures", "chains_per_temperature", "max_temperature", "jump_probability",
         "snr_prior_peak", "snr_max", "include_t", "fstat_cells_per_bin", "fstat_latitude_cells", "fstat_longitude_cells",
-        "fisher_refresh_steps", "sample_interval", "split_merge_probability", "split_merge_bins",
+        "fisher_refresh_steps", "sample_interval", "split_merge_probability", "split_merge_bins", "catalogue_min_snr",
     ];
 
     /// <summary>Lower edge of the analysed range [<c>f_min_hz</c>].</summary>
@@ -67,6 +67,12 @@ public sealed record GalacticBinaryBandSettings
     /// <summary>Largest frequency separation of a split pair [<c>split_merge_bins</c>].</summary>
     /// <value>Frequency bins of the record.</value>
     public double SplitMergeBins { get; init; } = 4.0;
+
+    /// <summary>Catalogue entries whose median optimal SNR lies below this are left out [<c>catalogue_min_snr</c>].</summary>
+    /// <remarks>Default 5, common practice rather than a derived value: below it the sampler's confident entries are
+    /// mostly blends of several weak binaries or noise fluctuations that match no single source, so a catalogue is
+    /// thresholded there (0 keeps everything).</remarks>
+    public double CatalogueMinSnr { get; init; } = 5.0;
 
     /// <summary>ρ*, the SNR at which the amplitude prior peaks [<c>snr_prior_peak</c>].</summary>
     public double SnrPriorPeak { get; init; } = 10.0;
@@ -127,6 +133,7 @@ public sealed record GalacticBinaryBandSettings
             FStatisticLongitudeCells = (int)table.GetInteger("fstat_longitude_cells", defaults.FStatisticLongitudeCells, 1, 1024),
             FisherRefreshSteps = (int)table.GetInteger("fisher_refresh_steps", defaults.FisherRefreshSteps, 0, 1_000_000),
             SampleInterval = (int)table.GetInteger("sample_interval", defaults.SampleInterval, 1, 1_000_000),
+            CatalogueMinSnr = table.GetNonNegative("catalogue_min_snr", defaults.CatalogueMinSnr),
         };
         table.RejectUnknownKeys(Keys);
         try

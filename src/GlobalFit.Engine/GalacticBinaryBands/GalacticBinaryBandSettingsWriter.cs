@@ -25,6 +25,8 @@ public static class GalacticBinaryBandSettingsWriter
         writer.Key("chains_per_temperature", settings.ChainsPerTemperature);
         writer.Key("max_temperature", settings.MaxTemperature);
         writer.Key("jump_probability", settings.JumpProbability);
+        writer.Key("split_merge_probability", settings.SplitMergeProbability);
+        writer.Key("split_merge_bins", settings.SplitMergeBins);
         writer.Key("snr_prior_peak", settings.SnrPriorPeak);
         writer.Key("snr_max", settings.SnrMax);
         writer.Key("include_t", settings.IncludeT);
@@ -33,5 +35,6 @@ public static class GalacticBinaryBandSettingsWriter
         writer.Key("fstat_longitude_cells", settings.FStatisticLongitudeCells);
         writer.Key("fisher_refresh_steps", settings.FisherRefreshSteps);
         writer.Key("sample_interval", settings.SampleInterval);
+        writer.Key("catalogue_min_snr", settings.CatalogueMinSnr);
     }
 }

@@ -56,7 +56,7 @@ internal sealed class GalacticBinaryFitPlan : IFitSourceClassPlan
         var first = _plan.Windows[0].Padded;
         var last = _plan.Windows[^1].Padded;
         return new GalacticBinaryClassCatalogue(_prototype.WithOwnBuffers(), new BinWindow(first.First, last.End - first.First),
-            noise, burnInIterations, minimumConfidence);
+            noise, burnInIterations, minimumConfidence, minimumSnr: _settings.CatalogueMinSnr);
     }
 
     public void WriteResolved(ResolvedConfigWriter writer) => GalacticBinaryBandSettingsWriter.Write(_settings, writer);

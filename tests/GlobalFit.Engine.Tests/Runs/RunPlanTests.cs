@@ -23,6 +23,17 @@ public sealed class RunPlanTests(SharedFitData data) : IClassFixture<SharedFitDa
     }
 
     [Fact]
+    public void The_resolved_configuration_lists_every_key_each_section_accepts()
+    {
+        var resolved = ConfigDocument.Parse(Plan("").ResolvedToml(), "run.toml");
+        foreach (string key in RunSettings.Keys) Assert.True(resolved.Has(key), key);
+        var noise = resolved.GetTable("noise")!;
+        foreach (string key in GlobalFit.Engine.NoiseFitting.NoiseFitSettings.Keys) Assert.True(noise.Has(key), "noise." + key);
+        var binaries = resolved.GetTable("galactic_binaries")!;
+        foreach (string key in GlobalFit.Engine.GalacticBinaryBands.GalacticBinaryBandSettings.Keys) Assert.True(binaries.Has(key), "galactic_binaries." + key);
+    }
+
+    [Fact]
     public void An_unknown_key_is_an_error_with_its_line_column_and_a_suggestion()
     {
         var error = Refused("iteratons = 5\n");

@@ -24,8 +24,7 @@ public static class CatalogueCommand
 
     private static int Run(CliContext context, string runFolder, string format, string? output, bool force)
     {
-        var layout = new RunFolderLayout(Path.GetFullPath(runFolder));
-        if (!File.Exists(layout.ResolvedConfig)) throw new InvalidInputException(layout.Root, null, "not a run folder (no run.toml)");
+        var layout = RunFolderLayout.OpenExisting(runFolder);
         if (format == "h5" && output is null) throw new InvalidInputException("--out", null, "the h5 format needs a file: --out FILE.h5");
         string? target = output is null ? null : Console.OutputPaths.CheckWritable(output, force, "--out");
         var plan = RunPlan.Load(layout.ResolvedConfig);

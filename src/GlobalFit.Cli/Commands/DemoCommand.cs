@@ -70,15 +70,15 @@ public static class DemoCommand
         if (Directory.Exists(runFolder)) Directory.Delete(runFolder, recursive: true);
         context.Out.WriteLine();
         context.Out.WriteLine($"demo: fitting galactic binaries and noise jointly ({configPath})");
-        status = FitCommand.Run(context, options => FitRunner.Start(configPath, options), otlp: null);
+        var catalogue = System.Collections.Immutable.ImmutableArray<CatalogueRecord>.Empty;
+        status = FitCommand.Run(context, options => FitRunner.Start(configPath, options), otlp: null, completed: outcome => catalogue = outcome.Catalogue);
         if (status != ExitCodes.Success) return status;
 
         context.Out.WriteLine();
-        var plan = RunPlan.Load(Path.Combine(runFolder, "run.toml"));
-        var records = RunCatalogue.Build(plan, new RunFolderLayout(runFolder), message => context.Error.WriteLine($"warning: {message}"));
+        var plan = RunPlan.Load(new RunFolderLayout(runFolder).ResolvedConfig);
         var truth = ObservationFile.Read(dataPath).FindTruth(GalacticBinaryFitClass.Id)
             ?? throw new InvalidInputException(dataPath, "/truth", "the demo data lost its truth table");
-        Print(context.Out, plan, records.Where(r => r.ClassId == GalacticBinaryFitClass.Id).ToList(), truth);
+        Print(context.Out, plan, catalogue.Where(r => r.ClassId == GalacticBinaryFitClass.Id).ToList(), truth);
         context.Out.WriteLine();
         context.Out.WriteLine($"demo: the run is in {runFolder}; try 'globalfit status {runFolder}', 'globalfit trace {runFolder}', 'globalfit catalogue {runFolder} --format json'");
         return ExitCodes.Success;

@@ -31,7 +31,11 @@ public static class FitCommand
     };
 
     /// <summary>Runs a fit (fresh or resumed) with progress, Ctrl-C handling and the exit-code policy.</summary>
-    internal static int Run(CliContext context, Func<FitRunOptions, FitOutcome> fit, Uri? otlp)
+    /// <param name="context">Where to write.</param>
+    /// <param name="fit">Starts or resumes the fit.</param>
+    /// <param name="otlp">OTLP endpoint or null.</param>
+    /// <param name="completed">Receives the outcome of a completed run (with its catalogue), e.g. for the demo's comparison.</param>
+    internal static int Run(CliContext context, Func<FitRunOptions, FitOutcome> fit, Uri? otlp, Action<FitOutcome>? completed = null)
     {
         var printer = new FitProgressPrinter(context);
         using var interrupt = new InterruptSignal();
@@ -40,7 +44,8 @@ public static class FitCommand
         switch (outcome.Kind)
         {
             case FitOutcomeKind.Completed:
-                context.Out.WriteLine($"fit complete: {outcome.IterationsCompleted} iterations; catalogue written (checkpoint at iteration {outcome.CheckpointIteration})");
+                context.Out.WriteLine($"fit complete: {outcome.IterationsCompleted} iterations; catalogue of {outcome.Catalogue.Length} entries written (checkpoint at iteration {outcome.CheckpointIteration})");
+                completed?.Invoke(outcome);
                 return ExitCodes.Success;
             case FitOutcomeKind.Interrupted:
                 context.Error.WriteLine($"interrupted after {outcome.IterationsCompleted} iterations; checkpoint at iteration {outcome.CheckpointIteration}; continue with 'globalfit resume RUN'");

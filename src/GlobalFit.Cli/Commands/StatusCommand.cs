@@ -23,9 +23,7 @@ public static class StatusCommand
 
     private static int Run(CliContext context, string runFolder, bool json)
     {
-        var layout = new RunFolderLayout(Path.GetFullPath(runFolder));
-        if (!File.Exists(layout.ResolvedConfig))
-            throw new InvalidInputException(layout.Root, null, "not a run folder (no run.toml)");
+        var layout = RunFolderLayout.OpenExisting(runFolder);
         var status = RunStatus.Read(layout) ?? throw new InvalidInputException(layout.StatusFile, null, "missing: the run never started");
         bool alive = RunLock.IsHeld(layout);
         string state = alive ? "running" : status.State == "running" ? "stopped (the process ended without finishing; resume it)" : status.State;

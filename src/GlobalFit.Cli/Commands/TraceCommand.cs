@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Telemetry;
 using GlobalFit.Physics.Input;
 
@@ -30,7 +31,7 @@ public static class TraceCommand
     {
         if (last is < 1) throw new InvalidInputException("--last", null, $"must be at least 1, got {last}");
         if (!Directory.Exists(runFolder)) throw new InvalidInputException(runFolder, null, "run folder does not exist");
-        string path = Path.Combine(runFolder, TelemetryJsonLines.FileName);
+        string path = new RunFolderLayout(Path.GetFullPath(runFolder)).TelemetryFile;
         if (!File.Exists(path))
             throw new InvalidInputException(path, null, "telemetry file does not exist: the run has not finished an iteration yet, or is not a run folder");
         var report = CriticalPathAnalysis.Read(path, last);

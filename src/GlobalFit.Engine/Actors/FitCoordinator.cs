@@ -33,11 +33,9 @@ public sealed class FitCoordinator : ReceiveActor
     private readonly Dictionary<string, object> _outstanding = new(StringComparer.Ordinal);
     private readonly Dictionary<string, WorkerUpdated> _stageResults = new(StringComparer.Ordinal);
     private readonly Dictionary<string, HandoversAccepted> _stageAdoptions = new(StringComparer.Ordinal);
-    private readonly Dictionary<string, double> _stageCompute = new(StringComparer.Ordinal);
     private readonly List<SampleBlock> _iterationBlocks = [];
     private readonly List<(string WorkerId, double ComputeMs)> _slowest = [];
     private readonly Dictionary<string, WorkerStatistics> _latestStatistics = new(StringComparer.Ordinal);
-    private readonly Dictionary<string, double> _lastComputeMs = new(StringComparer.Ordinal);
     private IActorRef _noise = ActorRefs.Nobody;
     private IActorRef? _requester;
     private byte[]? _noiseCommitted;
@@ -133,14 +131,13 @@ public sealed class FitCoordinator : ReceiveActor
         _stageSpan = FitTracing.StartStage(_iterationSpan, _current, _stageIndex, groups);
         _stageResults.Clear();
         _stageAdoptions.Clear();
-        _stageCompute.Clear();
         _stageNoise = null;
         _outstanding.Clear();
         // Longest first (by each worker's compute time in its last update): the compute threads take requests in the
         // order they are sent, so the stage does not end with one long update running alone. Only the order of work
         // changes, never its inputs, so results are unaffected.
         var members = groups.SelectMany(g => g == FitSchedule.NoiseGroup ? [NoiseId] : _plan.GroupWorkers(g).Select(w => w.Id));
-        foreach (string id in members.OrderByDescending(id => _lastComputeMs.GetValueOrDefault(id)).ThenBy(id => id, StringComparer.Ordinal))
+        foreach (string id in members.OrderByDescending(LastComputeMs).ThenBy(id => id, StringComparer.Ordinal))
             Serve(id);
     }
 
@@ -162,7 +159,6 @@ public sealed class FitCoordinator : ReceiveActor
     {
         if (_finished || !_outstanding.Remove(message.WorkerId)) return;
         _stageResults[message.WorkerId] = message;
-        _stageCompute[message.WorkerId] = _lastComputeMs[message.WorkerId] = message.Update.Statistics.WallTime.TotalMilliseconds;
         _latestStatistics[message.WorkerId] = message.Update.Statistics;
         if (_outstanding.Count == 0) RouteHandovers();
     }
@@ -171,14 +167,23 @@ public sealed class FitCoordinator : ReceiveActor
     {
         if (_finished || !_outstanding.Remove(NoiseId)) return;
         _stageNoise = message;
-        _stageCompute[NoiseId] = _lastComputeMs[NoiseId] = message.Statistics.WallTime.TotalMilliseconds;
         _latestStatistics[NoiseId] = message.Statistics;
         if (_outstanding.Count == 0) RouteHandovers();
     }
 
+    // Compute time of each update of the current stage, by worker id.
+    private Dictionary<string, double> StageComputeMs()
+    {
+        var compute = _stageResults.ToDictionary(r => r.Key, r => r.Value.Update.Statistics.WallTime.TotalMilliseconds, StringComparer.Ordinal);
+        if (_stageNoise is { } noise) compute[NoiseId] = noise.Statistics.WallTime.TotalMilliseconds;
+        return compute;
+    }
+
+    private double LastComputeMs(string id) => _latestStatistics.TryGetValue(id, out var statistics) ? statistics.WallTime.TotalMilliseconds : 0.0;
+
     private void RouteHandovers()
     {
-        FitTracing.RecordStageWaits(_stageCompute);
+        FitTracing.RecordStageWaits(StageComputeMs());
         var byTarget = _stageResults.Values.OrderBy(r => r.WorkerId, StringComparer.Ordinal)
             .SelectMany(r => r.Handovers)
             .Where(h => _workers.ContainsKey(h.TargetWorkerId))
@@ -224,9 +229,10 @@ public sealed class FitCoordinator : ReceiveActor
             _iterationBlocks.Add(noise.Samples);
             psd = noise.Psd;
         }
-        if (_stageCompute.Count > 0)
+        var stageCompute = StageComputeMs();
+        if (stageCompute.Count > 0)
         {
-            var slowest = _stageCompute.OrderByDescending(c => c.Value).ThenBy(c => c.Key, StringComparer.Ordinal).First();
+            var slowest = stageCompute.OrderByDescending(c => c.Value).ThenBy(c => c.Key, StringComparer.Ordinal).First();
             _slowest.Add((slowest.Key, slowest.Value));
         }
         _outstanding["residual"] = "commit";

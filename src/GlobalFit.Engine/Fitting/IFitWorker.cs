@@ -21,9 +21,6 @@ public interface IFitWorker
     /// <summary>Whether the worker uses channel T.</summary>
     bool IncludesT { get; }
 
-    /// <summary>Sources held by the first cold chain now.</summary>
-    int SourceCount { get; }
-
     /// <summary>Runs <paramref name="steps"/> sampler steps against <paramref name="residual"/>.</summary>
     /// <param name="residual">The residual over <see cref="Bins"/>.</param>
     /// <param name="steps">Steps, ≥ 1.</param>

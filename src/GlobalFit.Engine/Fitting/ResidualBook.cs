@@ -57,14 +57,8 @@ public sealed class ResidualBook
         SetInversePsd(inverseA, inverseE, inverseT);
     }
 
-    /// <summary>The data.</summary>
-    public FitData Data => _data;
-
     /// <summary>The current template of <paramref name="workerId"/>.</summary>
     public WindowSpectra Template(string workerId) => _templates[workerId];
-
-    /// <summary>Every worker's current template, by ordinal id.</summary>
-    public IEnumerable<KeyValuePair<string, WindowSpectra>> Templates => _templates;
 
     /// <summary>Replaces the template of one worker.</summary>
     /// <param name="workerId">The worker.</param>

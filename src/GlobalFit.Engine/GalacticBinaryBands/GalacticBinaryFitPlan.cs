@@ -25,7 +25,7 @@ internal sealed class GalacticBinaryFitPlan : IFitSourceClassPlan
         _settings = settings;
         _plan = plan;
         _prototype = prototype;
-        _tools = new GalacticBinaryToolPool(prototype.WithOwnBuffers());
+        _tools = new GalacticBinaryToolPool(prototype);
         Groups =
         [
             new WorkerGroup(GalacticBinaryFitClass.Id + ".even", [.. plan.Stage(0).Select(w => Describe(w, settings.IncludeT))]),

@@ -27,8 +27,6 @@ internal sealed class GalacticBinaryFitWorker : IFitWorker
 
     public bool IncludesT => _worker.IncludesT;
 
-    public int SourceCount => _worker.CurrentSources().Length;
-
     public WorkerUpdate Update(WorkerResidual residual, int steps)
     {
         ArgumentNullException.ThrowIfNull(residual);

@@ -38,51 +38,8 @@ public static class WhittleLikelihood
     public static double LogLikelihood(ReadOnlySpan<double> power, ReadOnlySpan<double> first, ReadOnlySpan<double> second,
         double firstCoefficient, double secondCoefficient, double logWeight)
     {
-        int n = power.Length;
-        if (first.Length != n || second.Length != n) throw new ArgumentException("shape and power lengths differ");
-        ref double p = ref MemoryMarshal.GetReference(power);
-        ref double x = ref MemoryMarshal.GetReference(first);
-        ref double y = ref MemoryMarshal.GetReference(second);
-        double sum = 0;
-        int i = 0;
-        // Unchecked: i + BlockBins ≤ n is guaranteed by the loop bound.
-        unchecked
-        {
-            if (Vector256.IsHardwareAccelerated)
-            {
-                var c1 = Vector256.Create(firstCoefficient);
-                var c2 = Vector256.Create(secondCoefficient);
-                var quotients0 = Vector256<double>.Zero;
-                var quotients1 = Vector256<double>.Zero;
-                var logs = Vector256<double>.Zero;
-                // A product of negative S could be positive, so the smallest S is tracked to reject them.
-                var smallest = Vector256.Create(double.PositiveInfinity);
-                for (; i <= n - BlockBins; i += BlockBins)
-                {
-                    var product = Vector256<double>.One;
-                    for (int v = 0; v < BlockBins; v += 8)
-                    {
-                        nuint at = (nuint)(i + v);
-                        var s0 = c1 * Vector256.LoadUnsafe(ref x, at) + c2 * Vector256.LoadUnsafe(ref y, at);
-                        var s1 = c1 * Vector256.LoadUnsafe(ref x, at + 4) + c2 * Vector256.LoadUnsafe(ref y, at + 4);
-                        quotients0 += Vector256.LoadUnsafe(ref p, at) / s0;
-                        quotients1 += Vector256.LoadUnsafe(ref p, at + 4) / s1;
-                        product *= s0 * s1;
-                        smallest = Vector256.Min(smallest, Vector256.Min(s0, s1));
-                    }
-                    logs += Vector256.Log(product);
-                }
-                sum = Vector256.Sum(quotients0 + quotients1) + logWeight * Vector256.Sum(logs);
-                if (!Vector256.GreaterThanAll(smallest, Vector256<double>.Zero)) return double.NegativeInfinity;
-            }
-            for (; i < n; i++)
-            {
-                double s = firstCoefficient * first[i] + secondCoefficient * second[i];
-                if (!(s > 0)) return double.NegativeInfinity;
-                sum += power[i] / s + logWeight * Math.Log(s);
-            }
-        }
-        return double.IsNaN(sum) || sum == double.PositiveInfinity ? double.NegativeInfinity : -sum;
+        if (first.Length != power.Length || second.Length != power.Length) throw new ArgumentException("shape and power lengths differ");
+        return Kernel(power, new TwoShapes(first, second, firstCoefficient, secondCoefficient), logWeight);
     }
 
     /// <summary><c>−Σ_k [p_k / S_k + w ln S_k]</c> with <c>S_k = c₁ x_k + c₂ y_k + c₃ z_k</c>.</summary>
@@ -98,12 +55,18 @@ public static class WhittleLikelihood
     public static double LogLikelihood(ReadOnlySpan<double> power, ReadOnlySpan<double> first, ReadOnlySpan<double> second,
         ReadOnlySpan<double> third, double firstCoefficient, double secondCoefficient, double thirdCoefficient, double logWeight)
     {
+        if (first.Length != power.Length || second.Length != power.Length || third.Length != power.Length)
+            throw new ArgumentException("shape and power lengths differ");
+        return Kernel(power, new ThreeShapes(first, second, third, firstCoefficient, secondCoefficient, thirdCoefficient), logWeight);
+    }
+
+    // One kernel for any number of shapes: TShapes is a struct, so the JIT compiles a copy per shape count with the
+    // PSD sum inlined, as fast as a hand-written copy.
+    private static double Kernel<TShapes>(ReadOnlySpan<double> power, TShapes shapes, double logWeight)
+        where TShapes : IShapeSum, allows ref struct
+    {
         int n = power.Length;
-        if (first.Length != n || second.Length != n || third.Length != n) throw new ArgumentException("shape and power lengths differ");
         ref double p = ref MemoryMarshal.GetReference(power);
-        ref double x = ref MemoryMarshal.GetReference(first);
-        ref double y = ref MemoryMarshal.GetReference(second);
-        ref double z = ref MemoryMarshal.GetReference(third);
         double sum = 0;
         int i = 0;
         // Unchecked: i + BlockBins ≤ n is guaranteed by the loop bound.
@@ -111,9 +74,6 @@ public static class WhittleLikelihood
         {
             if (Vector256.IsHardwareAccelerated)
             {
-                var c1 = Vector256.Create(firstCoefficient);
-                var c2 = Vector256.Create(secondCoefficient);
-                var c3 = Vector256.Create(thirdCoefficient);
                 var quotients0 = Vector256<double>.Zero;
                 var quotients1 = Vector256<double>.Zero;
                 var logs = Vector256<double>.Zero;
@@ -125,8 +85,8 @@ public static class WhittleLikelihood
                     for (int v = 0; v < BlockBins; v += 8)
                     {
                         nuint at = (nuint)(i + v);
-                        var s0 = c1 * Vector256.LoadUnsafe(ref x, at) + c2 * Vector256.LoadUnsafe(ref y, at) + c3 * Vector256.LoadUnsafe(ref z, at);
-                        var s1 = c1 * Vector256.LoadUnsafe(ref x, at + 4) + c2 * Vector256.LoadUnsafe(ref y, at + 4) + c3 * Vector256.LoadUnsafe(ref z, at + 4);
+                        var s0 = shapes.At(at);
+                        var s1 = shapes.At(at + 4);
                         quotients0 += Vector256.LoadUnsafe(ref p, at) / s0;
                         quotients1 += Vector256.LoadUnsafe(ref p, at + 4) / s1;
                         product *= s0 * s1;
@@ -139,12 +99,44 @@ public static class WhittleLikelihood
             }
             for (; i < n; i++)
             {
-                double s = firstCoefficient * first[i] + secondCoefficient * second[i] + thirdCoefficient * third[i];
+                double s = shapes.At(i);
                 if (!(s > 0)) return double.NegativeInfinity;
                 sum += power[i] / s + logWeight * Math.Log(s);
             }
         }
         return double.IsNaN(sum) || sum == double.PositiveInfinity ? double.NegativeInfinity : -sum;
+    }
+
+    private interface IShapeSum
+    {
+        /// <summary>S at bins at … at + 3.</summary>
+        Vector256<double> At(nuint at);
+
+        /// <summary>S at bin i.</summary>
+        double At(int i);
+    }
+
+    private readonly ref struct TwoShapes(ReadOnlySpan<double> x, ReadOnlySpan<double> y, double c1, double c2) : IShapeSum
+    {
+        private readonly ReadOnlySpan<double> _x = x, _y = y;
+
+        public Vector256<double> At(nuint at) =>
+            Vector256.Create(c1) * Vector256.LoadUnsafe(ref MemoryMarshal.GetReference(_x), at)
+            + Vector256.Create(c2) * Vector256.LoadUnsafe(ref MemoryMarshal.GetReference(_y), at);
+
+        public double At(int i) => c1 * _x[i] + c2 * _y[i];
+    }
+
+    private readonly ref struct ThreeShapes(ReadOnlySpan<double> x, ReadOnlySpan<double> y, ReadOnlySpan<double> z, double c1, double c2, double c3) : IShapeSum
+    {
+        private readonly ReadOnlySpan<double> _x = x, _y = y, _z = z;
+
+        public Vector256<double> At(nuint at) =>
+            Vector256.Create(c1) * Vector256.LoadUnsafe(ref MemoryMarshal.GetReference(_x), at)
+            + Vector256.Create(c2) * Vector256.LoadUnsafe(ref MemoryMarshal.GetReference(_y), at)
+            + Vector256.Create(c3) * Vector256.LoadUnsafe(ref MemoryMarshal.GetReference(_z), at);
+
+        public double At(int i) => c1 * _x[i] + c2 * _y[i] + c3 * _z[i];
     }
 
     /// <summary>Adds the score and the expected (Fisher) information of the coefficients: with

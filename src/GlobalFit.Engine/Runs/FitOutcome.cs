@@ -1,3 +1,6 @@
+using System.Collections.Immutable;
+using GlobalFit.Engine.Fitting;
+
 namespace GlobalFit.Engine.Runs;
 
 /// <summary>How a fit ended.</summary>
@@ -5,7 +8,11 @@ namespace GlobalFit.Engine.Runs;
 /// <param name="IterationsCompleted">Iterations completed in total (including those before a resume).</param>
 /// <param name="CheckpointIteration">Iteration of the newest checkpoint on disk (0 when none).</param>
 /// <param name="Message">For a failure, which worker failed and how; otherwise empty.</param>
-public sealed record FitOutcome(FitOutcomeKind Kind, long IterationsCompleted, long CheckpointIteration, string Message);
+public sealed record FitOutcome(FitOutcomeKind Kind, long IterationsCompleted, long CheckpointIteration, string Message)
+{
+    /// <summary>For a completed run, the catalogue it wrote; otherwise empty.</summary>
+    public ImmutableArray<CatalogueRecord> Catalogue { get; init; } = [];
+}
 
 /// <summary>How a fit ended.</summary>
 public enum FitOutcomeKind

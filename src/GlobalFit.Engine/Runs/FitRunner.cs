@@ -36,9 +36,7 @@ public static class FitRunner
         string resolved = plan.ResolvedToml();
         AtomicFile.Write(layout.ResolvedConfig, overwrite: false, s => s.Write(Encoding.UTF8.GetBytes(resolved)));
         var data = LoadData(plan, options.Progress);
-        var start = new StartingPoint(0, 0, plan.Workers.ToDictionary(w => w.Id, _ => (byte[]?)null, StringComparer.Ordinal),
-            plan.Workers.ToDictionary(w => w.Id, w => WindowSpectra.Zero(w.Bins, w.IncludesT), StringComparer.Ordinal), null);
-        return Run(plan, layout, Digest(resolved), data, start, options);
+        return Run(plan, layout, Digest(resolved), data, StartingPoint.Fresh(plan), options);
     }
 
     /// <summary>Continues a stopped fit from its newest intact checkpoint (or from the start when it never wrote one).</summary>
@@ -48,9 +46,7 @@ public static class FitRunner
     public static FitOutcome Resume(string runFolder, FitRunOptions options)
     {
         ArgumentNullException.ThrowIfNull(options);
-        var layout = new RunFolderLayout(Path.GetFullPath(runFolder));
-        if (!File.Exists(layout.ResolvedConfig))
-            throw new InvalidInputException(layout.Root, null, "not a run folder (no run.toml); start a fit with 'globalfit fit CONFIG.toml'");
+        var layout = RunFolderLayout.OpenExisting(runFolder);
         using var runLock = RunLock.Acquire(layout);
         string resolved = File.ReadAllText(layout.ResolvedConfig);
         var plan = RunPlan.Load(layout.ResolvedConfig);
@@ -71,8 +67,7 @@ public static class FitRunner
         }
         else
         {
-            start = new StartingPoint(0, 0, plan.Workers.ToDictionary(w => w.Id, _ => (byte[]?)null, StringComparer.Ordinal),
-                plan.Workers.ToDictionary(w => w.Id, w => WindowSpectra.Zero(w.Bins, w.IncludesT), StringComparer.Ordinal), null);
+            start = StartingPoint.Fresh(plan);
         }
         store.TruncateAfter(start.Iteration);
         var data = LoadData(plan, options.Progress);
@@ -85,7 +80,12 @@ public static class FitRunner
         NoiseWorker LoadNoise(byte[]? state) => state is null
             ? new NoiseWorker(plan.Noise, plan.Shape, settings.Seed)
             : NoiseWorker.Restore(plan.Noise, plan.Shape, state);
-        var (psd, noiseBins) = InitialNoise(LoadNoise(start.NoiseState), plan.Shape.BinCount);
+        // The worker that gives the starting PSD is handed to the noise actor for its first load (from the same state),
+        // so the per-bin arrays are built once; a restart after a failure loads afresh.
+        NoiseWorker? prebuilt = LoadNoise(start.NoiseState);
+        var psd = InversePsd.From(prebuilt, plan.Shape.BinCount);
+        var noiseBins = prebuilt.Bins;
+        NoiseWorker LoadNoiseOnce(byte[]? state) => Interlocked.Exchange(ref prebuilt, null) ?? LoadNoise(state);
         var book = new ResidualBook(data, plan.Workers.Select(w => (w.Id, w.Bins, w.IncludesT)), psd.A, psd.E, psd.T);
         foreach (var (id, template) in start.Templates) book.Replace(id, template);
         var progress = new StatusRecordingProgress(options.Progress, layout, start.CheckpointIteration);
@@ -99,21 +99,17 @@ public static class FitRunner
         var setup = new CoordinatorSetup(plan, digest, start.Iteration, start.CheckpointIteration, start.WorkerStates, start.Templates, start.NoiseState,
             residual, store, checkpointer, progress,
             (id, state) => state is null ? plan.ClassOf(id).CreateWorker(id, settings.Seed) : plan.ClassOf(id).RestoreWorker(id, state),
-            NoiseActor.Props(LoadNoise, plan.Shape.BinCount), noiseBins, plan.Noise.StepsPerUpdate);
+            NoiseActor.Props(LoadNoiseOnce, plan.Shape.BinCount), noiseBins, plan.Noise.StepsPerUpdate);
         var coordinator = system.ActorOf(FitCoordinator.Props(setup), "fit-coordinator");
         using var stop = options.Cancellation.Register(() => coordinator.Tell(new StopFit()));
         var finished = coordinator.Ask<FitFinished>(new StartFit(), Timeout.InfiniteTimeSpan).GetAwaiter().GetResult();
         system.Terminate().Wait(TimeSpan.FromSeconds(10));
         var outcome = finished.Outcome;
         progress.WriteState(outcome.Kind.ToString().ToLowerInvariant(), outcome.IterationsCompleted, settings.Iterations, outcome.Message, outcome.CheckpointIteration);
-        if (outcome.Kind == FitOutcomeKind.Completed) RunCatalogue.Export(plan, layout, options.Progress.Warning);
-        return outcome;
+        return outcome.Kind == FitOutcomeKind.Completed
+            ? outcome with { Catalogue = RunCatalogue.Export(plan, layout, options.Progress.Warning) }
+            : outcome;
     }
-
-    // The starting PSD and band from a throw-away noise worker (the noise actor builds its own), so that this one's
-    // per-bin arrays are not held for the whole run.
-    private static (InversePsd Psd, Physics.Series.BinWindow Bins) InitialNoise(NoiseWorker worker, int binCount) =>
-        (InversePsd.From(worker, binCount), worker.Bins);
 
     private static FitData LoadData(RunPlan plan, IFitProgress progress)
     {
@@ -128,5 +124,11 @@ public static class FitRunner
     internal static string Digest(string resolvedToml) => Convert.ToHexString(SHA256.HashData(Encoding.UTF8.GetBytes(resolvedToml)));
 
     private sealed record StartingPoint(long Iteration, long CheckpointIteration, IReadOnlyDictionary<string, byte[]?> WorkerStates,
-        IReadOnlyDictionary<string, WindowSpectra> Templates, byte[]? NoiseState);
+        IReadOnlyDictionary<string, WindowSpectra> Templates, byte[]? NoiseState)
+    {
+        // Before the first iteration: no worker has state and every template is zero.
+        public static StartingPoint Fresh(RunPlan plan) => new(0, 0,
+            plan.Workers.ToDictionary(w => w.Id, _ => (byte[]?)null, StringComparer.Ordinal),
+            plan.Workers.ToDictionary(w => w.Id, w => WindowSpectra.Zero(w.Bins, w.IncludesT), StringComparer.Ordinal), null);
+    }
 }

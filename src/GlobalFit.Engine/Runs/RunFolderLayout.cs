@@ -4,6 +4,17 @@ namespace GlobalFit.Engine.Runs;
 /// <param name="Root">The run folder, absolute.</param>
 public sealed record RunFolderLayout(string Root)
 {
+    /// <summary>The layout of an existing run folder: one that holds the <c>run.toml</c> a fit writes first.</summary>
+    /// <param name="folder">The folder, absolute or relative.</param>
+    /// <exception cref="Physics.Input.InvalidInputException">The folder holds no run.</exception>
+    public static RunFolderLayout OpenExisting(string folder)
+    {
+        var layout = new RunFolderLayout(Path.GetFullPath(folder));
+        if (!File.Exists(layout.ResolvedConfig))
+            throw new Physics.Input.InvalidInputException(layout.Root, null, "not a run folder (no run.toml); start a fit with 'globalfit fit CONFIG.toml'");
+        return layout;
+    }
+
     /// <summary>The resolved configuration.</summary>
     public string ResolvedConfig => Path.Combine(Root, "run.toml");
 
@@ -14,7 +25,7 @@ public sealed record RunFolderLayout(string Root)
     public string StatusFile => Path.Combine(Root, "status.json");
 
     /// <summary>Spans and metrics.</summary>
-    public string TelemetryFile => Path.Combine(Root, "telemetry.jsonl");
+    public string TelemetryFile => Path.Combine(Root, Telemetry.TelemetryJsonLines.FileName);
 
     /// <summary>The catalogue table.</summary>
     public string CatalogueCsv => Path.Combine(Root, "catalogue.csv");

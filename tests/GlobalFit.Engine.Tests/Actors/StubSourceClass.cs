@@ -59,8 +59,6 @@ internal sealed class StubSourceClass : IFitSourceClassPlan
 
         public bool IncludesT => false;
 
-        public int SourceCount => 1;
-
         public WorkerUpdate Update(WorkerResidual residual, int steps)
         {
             long next = _updates + 1;

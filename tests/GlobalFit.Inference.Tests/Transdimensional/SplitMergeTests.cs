@@ -31,27 +31,7 @@ public sealed class SplitMergeTests
         var sink = new CountSink(burnIn: 5_000, maxSources: 4);
         sampler.Advance(120_000, sink);
 
-        (double[] expected, double[][] amplitudeMeans) = model.ClosedForm();
-        int[] counts = sink.Counts.ToArray();
-        Console.WriteLine("p(k|y) closed form: " + string.Join(", ", expected.Select(p => p.ToString("F4"))));
-        Console.WriteLine("p(k|y) sampled:     " + string.Join(", ", Enumerable.Range(0, 5).Select(k => (counts.Count(c => c == k) / (double)counts.Length).ToString("F4"))));
-        for (int k = 0; k <= 4; k++)
-        {
-            int kk = k;
-            double[][] indicator = [counts.Select(c => c == kk ? 1.0 : 0.0).ToArray()];
-            MonteCarloBounds.AssertMeanWithin(indicator, expected[k], 4.5, $"p(k={k})");
-        }
-
-        for (int k = 1; k <= 4; k++)
-        {
-            if (expected[k] < 0.15)
-            {
-                continue;
-            }
-
-            MonteCarloBounds.AssertMeanWithin([sink.MeanA[k].ToArray()], amplitudeMeans[k][0], 4.5, $"E[a | k={k}]");
-            MonteCarloBounds.AssertMeanWithin([sink.MeanB[k].ToArray()], amplitudeMeans[k][1], 4.5, $"E[b | k={k}]");
-        }
+        ClosedFormPosterior.AssertSampled(model, sink);
 
         // The check above is only meaningful if split/merge actually moved k: at least a tenth of the moves it proposed
         // on the cold rung must have been accepted (measured: about a third).

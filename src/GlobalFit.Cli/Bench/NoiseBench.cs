@@ -1,5 +1,7 @@
 using GlobalFit.Physics.Noise;
 
+using GlobalFit.Engine.Benchmarking;
+
 namespace GlobalFit.Cli.Bench;
 
 /// <summary>Quick timing of A/E/T noise synthesis over one Julian year at 5 s (6,311,520 samples per channel,

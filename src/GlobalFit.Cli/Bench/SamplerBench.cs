@@ -1,5 +1,7 @@
 using GlobalFit.Inference.Performance;
 
+using GlobalFit.Engine.Benchmarking;
+
 namespace GlobalFit.Cli.Bench;
 
 /// <summary>Quick measurement of the sampler's own cost per step around a ~10 µs likelihood.</summary>

@@ -1,6 +1,8 @@
 using System.Numerics;
 using GlobalFit.Physics.Series;
 
+using GlobalFit.Engine.Benchmarking;
+
 namespace GlobalFit.Cli.Bench;
 
 /// <summary>Quick measurements of the series kernels: the inner product against a memory copy of the same

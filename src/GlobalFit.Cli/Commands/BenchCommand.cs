@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Globalization;
 using GlobalFit.Cli.Bench;
+using GlobalFit.Engine.Benchmarking;
 
 namespace GlobalFit.Cli.Commands;
 

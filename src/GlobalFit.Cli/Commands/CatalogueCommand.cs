@@ -1,5 +1,6 @@
 using System.CommandLine;
 using GlobalFit.Engine.Catalogue;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Runs;
 using GlobalFit.Physics.Input;
 

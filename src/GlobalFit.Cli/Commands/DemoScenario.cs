@@ -1,13 +1,15 @@
+using GlobalFit.Engine.SourceClasses;
+
 namespace GlobalFit.Cli.Commands;
 
-/// <summary>The built-in demo scenario: an invented month of data with instrument noise, the confusion
-/// foreground and an invented population of galactic binaries. Other source classes join as they arrive.</summary>
+/// <summary>The built-in demo scenario: an invented month of data with instrument noise and the confusion foreground,
+/// plus each registered class's invented sources (<see cref="IDemoPart.ScenarioToml"/>).</summary>
 internal static class DemoScenario
 {
-    public const string Toml = """
-        # Built-in demo: one invented month of observation with noise, the galactic foreground and an
-        # invented population of galactic binaries (a few loud enough to be resolved over a weak crowd).
-        name = "demo: one month of galactic binaries"
+    private const string Observation = """
+        # Built-in demo: one invented month of observation with noise, the confusion foreground and the invented
+        # sources of every source class in the demo.
+        name = "demo: one invented month"
         seed = 20261201
 
         [observation]
@@ -22,10 +24,11 @@ internal static class DemoScenario
         enabled = true
         fit_years = 1
         amplitude = 1.0
-
-        [galactic_binaries.population]
-        count = 4000
-        f_min_hz = 1e-3
-        f_max_hz = 8e-3
         """;
+
+    /// <summary>The scenario's TOML.</summary>
+    public static string Toml => string.Join("\n\n", [Observation, .. Parts.Select(p => p.ScenarioToml)]) + "\n";
+
+    /// <summary>The demo parts of the registered classes, in registration order.</summary>
+    public static IEnumerable<IDemoPart> Parts => SourceClassRegistry.Default.Classes.Select(c => c.Demo).OfType<IDemoPart>();
 }

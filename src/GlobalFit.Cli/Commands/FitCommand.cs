@@ -2,6 +2,8 @@ using System.CommandLine;
 using GlobalFit.Cli.Console;
 using GlobalFit.Engine.Runs;
 
+using GlobalFit.Engine.Orchestration;
+
 namespace GlobalFit.Cli.Commands;
 
 /// <summary><c>globalfit fit CONFIG.toml</c>: run a global fit described by a run configuration.</summary>

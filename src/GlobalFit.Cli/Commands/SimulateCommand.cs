@@ -3,6 +3,7 @@ using System.Globalization;
 using GlobalFit.Cli.Console;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
+using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.DataFiles;
 
 namespace GlobalFit.Cli.Commands;

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.CommandLine;
 using System.Globalization;
 using GlobalFit.Engine.Catalogue;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Runs;
 using GlobalFit.Physics.Input;
 
@@ -28,7 +29,7 @@ public static class StatusCommand
         bool alive = RunLock.IsHeld(layout);
         string state = alive ? "running" : status.State == "running" ? "stopped (the process ended without finishing; resume it)" : status.State;
         // Per class: a run may hold thousands of band workers.
-        var samples = new CatalogueStore(layout.Root).CountSamples()
+        var samples = new SampleStore(layout.Root).CountSamples()
             .GroupBy(w => w.Key.Split('/')[0], StringComparer.Ordinal)
             .ToImmutableSortedDictionary(g => g.Key, g => g.Sum(w => w.Value), StringComparer.Ordinal);
         if (json)

@@ -2,6 +2,8 @@ using System.Diagnostics;
 using System.Globalization;
 using GlobalFit.Engine.Runs;
 
+using GlobalFit.Engine.Orchestration;
+
 namespace GlobalFit.Cli.Console;
 
 /// <summary>Shows a fit's progress: on a terminal one redrawn line (iteration, ETA, ln L, sources per class); when

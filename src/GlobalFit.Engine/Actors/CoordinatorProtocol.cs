@@ -1,4 +1,5 @@
-using GlobalFit.Engine.Runs;
+using GlobalFit.Engine.Orchestration;
+
 
 namespace GlobalFit.Engine.Actors;
 

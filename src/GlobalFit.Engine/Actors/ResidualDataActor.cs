@@ -1,13 +1,11 @@
 using System.Diagnostics;
 using Akka.Actor;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Engine.NoiseFitting;
 
 namespace GlobalFit.Engine.Actors;
 
 /// <summary>Owns the data, every worker's current template and the current inverse PSDs (a <see cref="ResidualBook"/>);
-/// serves each worker its residual window and the noise worker the full residual, and swaps in a stage's results
-/// when the coordinator commits them.</summary>
+/// serves each worker its residual window and swaps in a stage's results when the coordinator commits them.</summary>
 public sealed class ResidualDataActor : ReceiveActor
 {
     private readonly ResidualBook _book;
@@ -18,14 +16,8 @@ public sealed class ResidualDataActor : ReceiveActor
         _book = book;
         Receive<ServeWorker>(m =>
         {
-            var residual = _book.ResidualFor(m.WorkerId, m.IncludeT);
+            var residual = _book.ResidualFor(m.WorkerId);
             m.Worker.Tell(new UpdateWorker(m.Iteration, m.StageIndex, residual, m.Steps, Stopwatch.GetTimestamp(), m.TraceParent), Sender);
-        });
-        Receive<ServeNoise>(m =>
-        {
-            var full = _book.FullResidual(m.Bins);
-            m.Noise.Tell(new UpdateNoise(m.Iteration, m.StageIndex, new NoiseResidual(full.Bins, full.A, full.E, full.T), m.Steps,
-                Stopwatch.GetTimestamp(), m.TraceParent), Sender);
         });
         Receive<CommitStage>(m =>
         {

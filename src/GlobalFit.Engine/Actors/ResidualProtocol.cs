@@ -1,28 +1,17 @@
 using Akka.Actor;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Physics.Series;
 
 namespace GlobalFit.Engine.Actors;
 
 /// <summary>Asks the residual-data actor to cut a worker's residual and send it the update request; the worker
 /// replies to the coordinator (the sender of this message).</summary>
 /// <param name="WorkerId">The worker.</param>
-/// <param name="IncludeT">Whether it uses channel T.</param>
 /// <param name="Worker">Its actor.</param>
 /// <param name="Iteration">Global-fit iteration.</param>
 /// <param name="StageIndex">Stage within the iteration.</param>
 /// <param name="Steps">Sampler steps.</param>
 /// <param name="TraceParent">W3C traceparent of the stage span, or null.</param>
-public sealed record ServeWorker(string WorkerId, bool IncludeT, IActorRef Worker, long Iteration, int StageIndex, int Steps, string? TraceParent);
-
-/// <summary>Asks the residual-data actor to cut the full residual over <paramref name="Bins"/> for the noise worker.</summary>
-/// <param name="Bins">The noise worker's band.</param>
-/// <param name="Noise">The noise actor.</param>
-/// <param name="Iteration">Global-fit iteration.</param>
-/// <param name="StageIndex">Stage within the iteration.</param>
-/// <param name="Steps">Sampler steps.</param>
-/// <param name="TraceParent">W3C traceparent of the stage span, or null.</param>
-public sealed record ServeNoise(BinWindow Bins, IActorRef Noise, long Iteration, int StageIndex, int Steps, string? TraceParent);
+public sealed record ServeWorker(string WorkerId, IActorRef Worker, long Iteration, int StageIndex, int Steps, string? TraceParent);
 
 /// <summary>Swaps in the templates and, when given, the inverse PSDs produced by one stage.</summary>
 /// <param name="Templates">New templates by worker id.</param>

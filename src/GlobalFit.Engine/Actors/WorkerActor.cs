@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using Akka.Actor;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Orchestration;
 using GlobalFit.Engine.Telemetry;
 
 namespace GlobalFit.Engine.Actors;
@@ -34,7 +35,7 @@ public sealed class WorkerActor : ReceiveActor
         {
             var worker = Loaded();
             worker.Accept(m.Handovers);
-            Sender.Tell(new HandoversAccepted(_workerId, worker.CurrentTemplate(), worker.SaveState()));
+            Sender.Tell(new HandoversAccepted(_workerId, new AdoptionResult(worker.CurrentTemplate(), worker.SaveState())));
         }));
     }
 
@@ -57,7 +58,7 @@ public sealed class WorkerActor : ReceiveActor
         FitTelemetry.RecordWorkerResult(span, _workerId, statistics.SourceCount,
             statistics.Steps, statistics.Acceptance, Stopwatch.GetElapsedTime(started, finished).TotalMilliseconds,
             Stopwatch.GetElapsedTime(request.SentTimestamp, started).TotalMilliseconds);
-        Sender.Tell(new WorkerUpdated(_workerId, update, handovers, state, finished));
+        Sender.Tell(new WorkerUpdated(_workerId, new UpdateResult(update, handovers, state)));
     }
 
     // Tags the exception with the worker id for the coordinator's supervisor strategy.

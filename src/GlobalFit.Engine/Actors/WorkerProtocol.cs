@@ -1,4 +1,5 @@
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Orchestration;
 
 namespace GlobalFit.Engine.Actors;
 
@@ -18,11 +19,8 @@ public sealed record UpdateWorker(long Iteration, int StageIndex, WorkerResidual
 
 /// <summary>A worker's reply to <see cref="UpdateWorker"/>.</summary>
 /// <param name="WorkerId">The worker.</param>
-/// <param name="Update">Its template, samples and statistics.</param>
-/// <param name="Handovers">Sources it gave up to other workers (already removed from <see cref="Update"/>'s template).</param>
-/// <param name="State">Its state after the update and the handovers.</param>
-/// <param name="FinishedTimestamp">Stopwatch timestamp when it finished.</param>
-public sealed record WorkerUpdated(string WorkerId, WorkerUpdate Update, IReadOnlyList<Handover> Handovers, byte[] State, long FinishedTimestamp);
+/// <param name="Result">Its update, handovers and state.</param>
+public sealed record WorkerUpdated(string WorkerId, UpdateResult Result);
 
 /// <summary>Hands sources to a worker between stages.</summary>
 /// <param name="Handovers">Handovers addressed to it.</param>
@@ -30,6 +28,5 @@ public sealed record AcceptHandovers(IReadOnlyList<Handover> Handovers);
 
 /// <summary>A worker's reply to <see cref="AcceptHandovers"/>.</summary>
 /// <param name="WorkerId">The worker.</param>
-/// <param name="Template">Its template with the adopted sources.</param>
-/// <param name="State">Its state after adopting.</param>
-public sealed record HandoversAccepted(string WorkerId, WindowSpectra Template, byte[] State);
+/// <param name="Result">Its template with the adopted sources, and its state.</param>
+public sealed record HandoversAccepted(string WorkerId, AdoptionResult Result);

@@ -1,26 +1,30 @@
 using System.Collections.Immutable;
+using GlobalFit.Engine.Orchestration;
 using MessagePack;
 
 namespace GlobalFit.Engine.Checkpoints;
 
 /// <summary>Everything a run needs to continue bit for bit after iteration <see cref="Iteration"/>: every worker's
-/// sampler state (random streams included), every template, and the noise worker's state.</summary>
+/// sampler state (random streams included, the noise worker's among them) and every template.</summary>
 /// <param name="FormatVersion">Checkpoint layout version.</param>
 /// <param name="Iteration">Iterations completed.</param>
 /// <param name="ConfigDigest">SHA-256 of the resolved configuration, so a checkpoint is never resumed under another
 /// configuration.</param>
 /// <param name="Workers">Worker states, by ordinal id.</param>
 /// <param name="Templates">Current templates, by ordinal id.</param>
-/// <param name="NoiseState">The noise worker's state.</param>
 [MessagePackObject]
 public sealed record RunCheckpoint(
     [property: Key(0)] int FormatVersion,
     [property: Key(1)] long Iteration,
     [property: Key(2)] string ConfigDigest,
     [property: Key(3)] ImmutableArray<SavedWorkerState> Workers,
-    [property: Key(4)] ImmutableArray<SavedTemplate> Templates,
-    [property: Key(5)] byte[] NoiseState)
+    [property: Key(4)] ImmutableArray<SavedTemplate> Templates)
 {
-    /// <summary>The layout this build writes.</summary>
-    public const int CurrentFormatVersion = 1;
+    /// <summary>The layout this build writes. Version 1 kept the noise worker's state apart from the others.</summary>
+    public const int CurrentFormatVersion = 2;
+
+    /// <summary>Where the run stands according to this checkpoint.</summary>
+    public FitPosition Position() => new(Iteration, Iteration,
+        Workers.ToImmutableSortedDictionary(w => w.WorkerId, w => w.State, StringComparer.Ordinal),
+        Templates.ToImmutableSortedDictionary(t => t.WorkerId, t => t.ToSpectra(), StringComparer.Ordinal));
 }

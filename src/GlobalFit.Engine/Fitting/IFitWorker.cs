@@ -12,7 +12,7 @@ namespace GlobalFit.Engine.Fitting;
 /// </remarks>
 public interface IFitWorker
 {
-    /// <summary>Stable id, unique in the run (e.g. <c>galactic_binaries/0042</c>); names its files and telemetry.</summary>
+    /// <summary>Stable id, unique in the run (<c>class_id/label</c>); names its files and telemetry.</summary>
     string Id { get; }
 
     /// <summary>Bins the worker reads and whose template it writes.</summary>
@@ -27,8 +27,9 @@ public interface IFitWorker
     /// <returns>The new template, the samples and the statistics.</returns>
     WorkerUpdate Update(WorkerResidual residual, int steps);
 
-    /// <summary>The template of the sources held now (zero before the first update).</summary>
-    WindowSpectra CurrentTemplate();
+    /// <summary>The template of the sources held now (zero before the first update); null for a worker that holds
+    /// no template (<see cref="WorkerRole.Noise"/>).</summary>
+    WindowSpectra? CurrentTemplate();
 
     /// <summary>The whole state, for checkpoints and restarts.</summary>
     byte[] SaveState();

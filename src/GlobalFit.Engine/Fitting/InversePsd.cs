@@ -22,9 +22,21 @@ public sealed record InversePsd(double[] A, double[] E, double[] T)
     {
         var values = new double[binCount];
         if (binCount <= 1) return values;
-        source.FillPsd(channel, new BinWindow(1, binCount - 1), values.AsSpan(1));
-        for (int k = 1; k < binCount; k++)
-            values[k] = values[k] > 0 && double.IsFinite(values[k]) ? 1.0 / values[k] : 0.0;
+        Fill(source, channel, new BinWindow(1, binCount - 1), values.AsSpan(1));
         return values;
+    }
+
+    /// <summary>Writes the weights 1/S of <paramref name="channel"/> over <paramref name="bins"/>, by the rule of this
+    /// type: a bin whose PSD is not positive and finite gets weight 0.</summary>
+    /// <param name="source">The noise model.</param>
+    /// <param name="channel">A, E or T.</param>
+    /// <param name="bins">The bins.</param>
+    /// <param name="weights">Output, <paramref name="bins"/>.Count values.</param>
+    public static void Fill(IPsdSource source, AetChannel channel, BinWindow bins, Span<double> weights)
+    {
+        ArgumentNullException.ThrowIfNull(source);
+        source.FillPsd(channel, bins, weights);
+        for (int k = 0; k < weights.Length; k++)
+            weights[k] = weights[k] > 0 && double.IsFinite(weights[k]) ? 1.0 / weights[k] : 0.0;
     }
 }

@@ -4,8 +4,9 @@ using GlobalFit.Physics.Series;
 
 namespace GlobalFit.Engine.Fitting;
 
-/// <summary>The data, every worker's current template and the current inverse noise PSDs; cuts each worker's residual
-/// (data minus every <em>other</em> worker's template) and the full residual the noise worker fits.</summary>
+/// <summary>The data, every source worker's current template and the current inverse noise PSDs; cuts each worker's
+/// residual: data minus every <em>other</em> worker's template over its window (for the noise worker, which holds no
+/// template, that is data minus every template).</summary>
 /// <remarks>
 /// <para>A residual is always summed afresh in one canonical order, ((d − h₁) − h₂) − … over the other workers in
 /// ordinal id order, rather than kept as a running difference. So it depends only on the current set of templates, not
@@ -19,6 +20,7 @@ public sealed class ResidualBook
     private readonly FitData _data;
     private readonly SortedDictionary<string, WindowSpectra> _templates = new(StringComparer.Ordinal);
     private readonly Dictionary<string, BinWindow> _windows = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, bool> _includesT = new(StringComparer.Ordinal);
     private readonly Dictionary<string, string[]> _overlapping = new(StringComparer.Ordinal);
     private double[] _inverseA;
     private double[] _inverseE;
@@ -26,20 +28,22 @@ public sealed class ResidualBook
 
     /// <summary>Creates a book for <paramref name="workers"/>, all templates zero and the inverse PSDs given.</summary>
     /// <param name="data">The data.</param>
-    /// <param name="workers">Every worker of the run with its window and whether it uses T.</param>
+    /// <param name="workers">Every worker of the run: its window, whether it uses T and whether it holds a template.</param>
     /// <param name="inverseA">1/S_A over all bins.</param>
     /// <param name="inverseE">1/S_E over all bins.</param>
     /// <param name="inverseT">1/S_T over all bins.</param>
-    public ResidualBook(FitData data, IEnumerable<(string Id, BinWindow Bins, bool IncludesT)> workers, double[] inverseA, double[] inverseE, double[] inverseT)
+    public ResidualBook(FitData data, IEnumerable<WorkerDescriptor> workers, double[] inverseA, double[] inverseE, double[] inverseT)
     {
         _data = data ?? throw new ArgumentNullException(nameof(data));
         ArgumentNullException.ThrowIfNull(workers);
-        foreach (var (id, bins, includesT) in workers)
+        foreach (var worker in workers)
         {
+            var (id, bins) = (worker.Id, worker.Bins);
             if (bins.First < 0 || bins.End > data.Shape.BinCount)
                 throw new ArgumentException($"worker {id} reads bins {bins} outside the data's 0…{data.Shape.BinCount - 1}", nameof(workers));
             if (!_windows.TryAdd(id, bins)) throw new ArgumentException($"worker id {id} appears twice", nameof(workers));
-            _templates[id] = WindowSpectra.Zero(bins, includesT);
+            _includesT[id] = worker.IncludesT;
+            if (worker.Role == WorkerRole.Sources) _templates[id] = WindowSpectra.Zero(bins, worker.IncludesT);
         }
         // Windows sorted by first bin; each window's overlap list is found by scanning neighbours in that order.
         var byStart = _windows.OrderBy(w => w.Value.First).ThenBy(w => w.Key, StringComparer.Ordinal).ToArray();
@@ -49,7 +53,7 @@ public sealed class ResidualBook
             foreach (var (other, otherBins) in byStart)
             {
                 if (otherBins.First >= bins.End) break;
-                if (other != id && otherBins.End > bins.First) others.Add(other);
+                if (other != id && otherBins.End > bins.First && _templates.ContainsKey(other)) others.Add(other);
             }
             others.Sort(StringComparer.Ordinal);
             _overlapping[id] = [.. others];
@@ -66,7 +70,8 @@ public sealed class ResidualBook
     public void Replace(string workerId, WindowSpectra template)
     {
         ArgumentNullException.ThrowIfNull(template);
-        if (!_windows.TryGetValue(workerId, out var bins)) throw new ArgumentException($"unknown worker {workerId}", nameof(workerId));
+        if (!_windows.TryGetValue(workerId, out var bins) || !_templates.ContainsKey(workerId))
+            throw new ArgumentException($"{workerId} is not a worker that holds a template", nameof(workerId));
         if (template.Bins != bins) throw new ArgumentException($"template of {workerId} covers {template.Bins}, its window is {bins}", nameof(template));
         if ((template.T is null) != (_templates[workerId].T is null))
             throw new ArgumentException($"template of {workerId} changes whether it holds channel T", nameof(template));
@@ -90,30 +95,20 @@ public sealed class ResidualBook
         _inverseT = inverseT;
     }
 
-    /// <summary>The residual of <paramref name="workerId"/>: data minus every other worker's template over its window.</summary>
+    /// <summary>The residual of <paramref name="workerId"/>: data minus every other worker's template over its window,
+    /// with channel T exactly when the worker uses it.</summary>
     /// <param name="workerId">The worker.</param>
-    /// <param name="includeT">Whether to cut channel T.</param>
-    public WorkerResidual ResidualFor(string workerId, bool includeT)
+    public WorkerResidual ResidualFor(string workerId)
     {
         var bins = _windows[workerId];
+        bool includeT = _includesT[workerId];
         var a = _data.A.AsSpan(bins.First, bins.Count).ToArray();
         var e = _data.E.AsSpan(bins.First, bins.Count).ToArray();
         var t = includeT ? _data.T.AsSpan(bins.First, bins.Count).ToArray() : null;
         foreach (string other in _overlapping[workerId]) Subtract(_templates[other], bins, a, e, t);
-        return new WorkerResidual(bins, _data.Shape.DfHz, a, e, t,
+        return new WorkerResidual(new WindowSpectra(bins, a, e, t), _data.Shape.DfHz,
             _inverseA.AsSpan(bins.First, bins.Count).ToArray(), _inverseE.AsSpan(bins.First, bins.Count).ToArray(),
             includeT ? _inverseT.AsSpan(bins.First, bins.Count).ToArray() : null);
-    }
-
-    /// <summary>Data minus every worker's template over <paramref name="bins"/>, all three channels.</summary>
-    /// <param name="bins">The bins (e.g. the noise worker's band).</param>
-    public WindowSpectra FullResidual(BinWindow bins)
-    {
-        var a = _data.A.AsSpan(bins.First, bins.Count).ToArray();
-        var e = _data.E.AsSpan(bins.First, bins.Count).ToArray();
-        var t = _data.T.AsSpan(bins.First, bins.Count).ToArray();
-        foreach (var (_, template) in _templates) Subtract(template, bins, a, e, t);
-        return new WindowSpectra(bins, a, e, t);
     }
 
     // Subtracts the part of `template` inside `bins` from the arrays that hold `bins`.

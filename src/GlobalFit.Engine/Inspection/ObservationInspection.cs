@@ -1,5 +1,6 @@
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
+using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Noise;
 

@@ -1,3 +1,5 @@
+using GlobalFit.Engine.Orchestration;
+
 namespace GlobalFit.Engine.Runs;
 
 /// <summary>How to run a fit besides its configuration.</summary>

@@ -4,12 +4,14 @@ using System.Text;
 using Akka.Actor;
 using GlobalFit.Engine.Actors;
 using GlobalFit.Engine.Catalogue;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Engine.NoiseFitting;
 using GlobalFit.Engine.Telemetry;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Input;
+
+using GlobalFit.Engine.Orchestration;
 
 namespace GlobalFit.Engine.Runs;
 
@@ -36,7 +38,7 @@ public static class FitRunner
         string resolved = plan.ResolvedToml();
         AtomicFile.Write(layout.ResolvedConfig, overwrite: false, s => s.Write(Encoding.UTF8.GetBytes(resolved)));
         var data = LoadData(plan, options.Progress);
-        return Run(plan, layout, Digest(resolved), data, StartingPoint.Fresh(plan), options);
+        return Run(plan, layout, Digest(resolved), data, FitPosition.Fresh(plan.Workers), options);
     }
 
     /// <summary>Continues a stopped fit from its newest intact checkpoint (or from the start when it never wrote one).</summary>
@@ -53,40 +55,35 @@ public static class FitRunner
         if (plan.Settings.RunFolder != layout.Root)
             throw new InvalidInputException(layout.ResolvedConfig, "key 'run_folder'", $"names {plan.Settings.RunFolder}, but the run is in {layout.Root}; a moved run folder must have run_folder updated");
         string digest = Digest(resolved);
-        StartingPoint start;
-        var store = new CatalogueStore(layout.Root);
+        FitPosition start;
+        var store = new SampleStore(layout.Root);
         if (CheckpointFile.Exists(layout.Root))
         {
             var checkpoint = CheckpointFile.Read(layout.Root, options.Progress.Warning);
             if (checkpoint.ConfigDigest != digest)
                 throw new InvalidInputException(layout.ResolvedConfig, null, "run.toml was edited after the checkpoint was written; restore it or start a new fit");
-            start = new StartingPoint(checkpoint.Iteration, checkpoint.Iteration,
-                checkpoint.Workers.ToDictionary(w => w.WorkerId, w => w.State, StringComparer.Ordinal),
-                checkpoint.Templates.ToDictionary(t => t.WorkerId, t => t.ToSpectra(), StringComparer.Ordinal),
-                checkpoint.NoiseState.Length == 0 ? null : checkpoint.NoiseState);
+            start = checkpoint.Position();
         }
         else
         {
-            start = StartingPoint.Fresh(plan);
+            start = FitPosition.Fresh(plan.Workers);
         }
         store.TruncateAfter(start.Iteration);
         var data = LoadData(plan, options.Progress);
         return Run(plan, layout, digest, data, start, options);
     }
 
-    private static FitOutcome Run(RunPlan plan, RunFolderLayout layout, string digest, FitData data, StartingPoint start, FitRunOptions options)
+    private static FitOutcome Run(RunPlan plan, RunFolderLayout layout, string digest, FitData data, FitPosition start, FitRunOptions options)
     {
         var settings = plan.Settings;
-        NoiseWorker LoadNoise(byte[]? state) => state is null
-            ? new NoiseWorker(plan.Noise, plan.Shape, settings.Seed)
-            : NoiseWorker.Restore(plan.Noise, plan.Shape, state);
-        // The worker that gives the starting PSD is handed to the noise actor for its first load (from the same state),
-        // so the per-bin arrays are built once; a restart after a failure loads afresh.
-        NoiseWorker? prebuilt = LoadNoise(start.NoiseState);
-        var psd = InversePsd.From(prebuilt, plan.Shape.BinCount);
-        var noiseBins = prebuilt.Bins;
-        NoiseWorker LoadNoiseOnce(byte[]? state) => Interlocked.Exchange(ref prebuilt, null) ?? LoadNoise(state);
-        var book = new ResidualBook(data, plan.Workers.Select(w => (w.Id, w.Bins, w.IncludesT)), psd.A, psd.E, psd.T);
+        IFitWorker Load(string id, byte[]? state) => state is null ? plan.ClassOf(id).CreateWorker(id, settings.Seed) : plan.ClassOf(id).RestoreWorker(id, state);
+        // The noise worker that gives the starting PSD is handed to its actor for its first load (from the same state),
+        // so its per-bin arrays are built once; a restart after a failure loads afresh.
+        var noiseId = plan.NoiseWorker.Id;
+        var prebuilt = Load(noiseId, start.WorkerStates[noiseId]);
+        var psd = InversePsd.From((IPsdSource)prebuilt, plan.Shape.BinCount);
+        IFitWorker LoadOnce(string id, byte[]? state) => id == noiseId && Interlocked.Exchange(ref prebuilt, null) is { } built ? built : Load(id, state);
+        var book = new ResidualBook(data, plan.Workers, psd.A, psd.E, psd.T);
         foreach (var (id, template) in start.Templates) book.Replace(id, template);
         var progress = new StatusRecordingProgress(options.Progress, layout, start.CheckpointIteration);
         progress.WriteState("running", start.Iteration, settings.Iterations, "");
@@ -94,12 +91,10 @@ public static class FitRunner
         using var telemetry = TelemetrySession.Start(layout.Root, options.OtlpEndpoint);
         using var system = FitActorSystem.Create(settings.Threads);
         var residual = system.ActorOf(ResidualDataActor.Props(book), "residual-data");
-        var store = system.ActorOf(CatalogueStoreActor.Props(new CatalogueStore(layout.Root)), "catalogue-store");
+        var store = system.ActorOf(SampleStoreActor.Props(new SampleStore(layout.Root)), "sample-store");
         var checkpointer = system.ActorOf(CheckpointerActor.Props(layout.Root), "checkpointer");
-        var setup = new CoordinatorSetup(plan, digest, start.Iteration, start.CheckpointIteration, start.WorkerStates, start.Templates, start.NoiseState,
-            residual, store, checkpointer, progress,
-            (id, state) => state is null ? plan.ClassOf(id).CreateWorker(id, settings.Seed) : plan.ClassOf(id).RestoreWorker(id, state),
-            NoiseActor.Props(LoadNoiseOnce, plan.Shape.BinCount), noiseBins, plan.Noise.StepsPerUpdate);
+        var setup = new CoordinatorSetup(plan.StagePlan(digest), start, plan.Workers.ToDictionary(w => w.Id, w => w.Label, StringComparer.Ordinal),
+            settings.Threads, residual, store, checkpointer, progress, LoadOnce);
         var coordinator = system.ActorOf(FitCoordinator.Props(setup), "fit-coordinator");
         using var stop = options.Cancellation.Register(() => coordinator.Tell(new StopFit()));
         var finished = coordinator.Ask<FitFinished>(new StartFit(), Timeout.InfiniteTimeSpan).GetAwaiter().GetResult();
@@ -122,13 +117,4 @@ public static class FitRunner
 
     /// <summary>SHA-256 of the resolved configuration text, hex.</summary>
     internal static string Digest(string resolvedToml) => Convert.ToHexString(SHA256.HashData(Encoding.UTF8.GetBytes(resolvedToml)));
-
-    private sealed record StartingPoint(long Iteration, long CheckpointIteration, IReadOnlyDictionary<string, byte[]?> WorkerStates,
-        IReadOnlyDictionary<string, WindowSpectra> Templates, byte[]? NoiseState)
-    {
-        // Before the first iteration: no worker has state and every template is zero.
-        public static StartingPoint Fresh(RunPlan plan) => new(0, 0,
-            plan.Workers.ToDictionary(w => w.Id, _ => (byte[]?)null, StringComparer.Ordinal),
-            plan.Workers.ToDictionary(w => w.Id, w => WindowSpectra.Zero(w.Bins, w.IncludesT), StringComparer.Ordinal), null);
-    }
 }

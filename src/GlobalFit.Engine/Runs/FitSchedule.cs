@@ -5,19 +5,16 @@ using GlobalFit.Engine.Fitting;
 namespace GlobalFit.Engine.Runs;
 
 /// <summary>The blocked-Gibbs schedule: an ordered list of stages, each a set of worker groups whose templates never
-/// share a bin, so their workers may update at the same time. The noise worker is the group <c>noise</c>.</summary>
+/// share a bin, so their workers may update at the same time.</summary>
 /// <param name="Stages">Group names per stage, in order.</param>
 public sealed record FitSchedule(ImmutableArray<ImmutableArray<string>> Stages)
 {
-    /// <summary>The noise worker's group name.</summary>
-    public const string NoiseGroup = "noise";
-
-    /// <summary>Every class group in class order, one per stage, then the noise worker.</summary>
+    /// <summary>Every group in module registration order, one per stage.</summary>
     public static FitSchedule Default(IEnumerable<IFitSourceClassPlan> classes) =>
-        new([.. classes.SelectMany(c => c.Groups).Select(g => ImmutableArray.Create(g.Name)), ImmutableArray.Create(NoiseGroup)]);
+        new([.. classes.SelectMany(c => c.Groups).Select(g => ImmutableArray.Create(g.Name))]);
 
     /// <summary>Reads <c>[schedule] stages</c> (an array whose items are a group name or an array of group names) and
-    /// checks that every group of <paramref name="classes"/> and the noise group appear exactly once.</summary>
+    /// checks that every group of <paramref name="classes"/> appears exactly once.</summary>
     /// <param name="table">The <c>[schedule]</c> table, or null for the default schedule.</param>
     /// <param name="classes">The planned classes.</param>
     /// <exception cref="Physics.Input.InvalidInputException">A group is unknown, repeated or missing; the message names
@@ -30,7 +27,7 @@ public sealed record FitSchedule(ImmutableArray<ImmutableArray<string>> Stages)
             table?.RejectUnknownKeys(["stages"]);
             return Default(classes);
         }
-        var known = classes.SelectMany(c => c.Groups).Select(g => g.Name).Append(NoiseGroup).ToList();
+        var known = classes.SelectMany(c => c.Groups).Select(g => g.Name).ToList();
         var raw = table.GetStringLists("stages");
         table.RejectUnknownKeys(["stages"]);
         var seen = new HashSet<string>(StringComparer.Ordinal);

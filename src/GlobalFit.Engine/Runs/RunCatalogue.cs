@@ -1,8 +1,8 @@
 using System.Collections.Immutable;
 using GlobalFit.Engine.Catalogue;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Engine.NoiseFitting;
 using GlobalFit.Physics.Input;
 
 namespace GlobalFit.Engine.Runs;
@@ -22,7 +22,7 @@ public static class RunCatalogue
         ArgumentNullException.ThrowIfNull(layout);
         var noise = FinalNoise(plan, layout, warn);
         var catalogues = plan.Classes.ToDictionary(c => c.ClassId, c => c.CreateCatalogue(noise, plan.Settings.BurnIn, plan.Settings.MinConfidence), StringComparer.Ordinal);
-        foreach (var block in new CatalogueStore(layout.Root).ReadAll())
+        foreach (var block in new SampleStore(layout.Root).ReadAll())
             if (catalogues.TryGetValue(block.ClassId, out var catalogue)) catalogue.Add(block);
         return [.. plan.Classes.SelectMany(c => catalogues[c.ClassId].Build())];
     }
@@ -36,13 +36,15 @@ public static class RunCatalogue
         return records;
     }
 
+    // The noise model of the newest checkpoint: its noise worker restored (or fresh when it never ran).
     private static IPsdSource FinalNoise(RunPlan plan, RunFolderLayout layout, Action<string> warn)
     {
         if (!CheckpointFile.Exists(layout.Root))
             throw new InvalidInputException(layout.Root, null, "the run has no checkpoint yet, so there is no noise model to build the catalogue with");
         var checkpoint = CheckpointFile.Read(layout.Root, warn);
-        return checkpoint.NoiseState.Length == 0
-            ? new NoiseWorker(plan.Noise, plan.Shape, plan.Settings.Seed)
-            : NoiseWorker.Restore(plan.Noise, plan.Shape, checkpoint.NoiseState);
+        string id = plan.NoiseWorker.Id;
+        byte[]? state = checkpoint.Workers.FirstOrDefault(w => w.WorkerId == id)?.State;
+        var worker = state is null ? plan.ClassOf(id).CreateWorker(id, plan.Settings.Seed) : plan.ClassOf(id).RestoreWorker(id, state);
+        return worker as IPsdSource ?? throw new InvalidOperationException($"worker {id} models the noise but serves no PSD");
     }
 }

@@ -1,24 +1,24 @@
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Engine.NoiseFitting;
+using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Input;
 
 namespace GlobalFit.Engine.Runs;
 
-/// <summary>A run configuration read, checked against its data and resolved: the settings, the classes that run and
-/// their workers, the noise model and the schedule. Everything that can be wrong with a configuration is found here,
-/// before any actor starts.</summary>
+/// <summary>A run configuration read, checked against its data and resolved: the settings, the modules that run (source
+/// classes and the noise model) with their workers, and the schedule. Everything that can be wrong with a configuration
+/// is found here, before any actor starts.</summary>
 public sealed class RunPlan
 {
     private readonly Dictionary<string, (IFitSourceClassPlan Plan, WorkerDescriptor Worker)> _workers = new(StringComparer.Ordinal);
 
-    private RunPlan(RunSettings settings, FitDataShape shape, IReadOnlyList<IFitSourceClassPlan> classes, NoiseFitSettings noise, FitSchedule schedule)
+    private RunPlan(RunSettings settings, FitDataShape shape, IReadOnlyList<IFitSourceClassPlan> classes, FitSchedule schedule)
     {
         Settings = settings;
         Shape = shape;
         Classes = classes;
-        Noise = noise;
         Schedule = schedule;
         foreach (var plan in classes)
             foreach (var group in plan.Groups)
@@ -27,8 +27,8 @@ public sealed class RunPlan
     }
 
     /// <summary>Assembles a plan from parts already checked (tests of the engine with stand-in classes).</summary>
-    internal static RunPlan Create(RunSettings settings, FitDataShape shape, IReadOnlyList<IFitSourceClassPlan> classes, NoiseFitSettings noise, FitSchedule schedule) =>
-        new(settings, shape, classes, noise, schedule);
+    internal static RunPlan Create(RunSettings settings, FitDataShape shape, IReadOnlyList<IFitSourceClassPlan> classes, FitSchedule schedule) =>
+        new(settings, shape, classes, schedule);
 
     /// <summary>Top-level settings.</summary>
     public RunSettings Settings { get; }
@@ -36,16 +36,13 @@ public sealed class RunPlan
     /// <summary>The data record's shape.</summary>
     public FitDataShape Shape { get; }
 
-    /// <summary>The source classes that run, in registration order.</summary>
+    /// <summary>The modules that run, in registration order (the noise model among them).</summary>
     public IReadOnlyList<IFitSourceClassPlan> Classes { get; }
-
-    /// <summary>The noise model.</summary>
-    public NoiseFitSettings Noise { get; }
 
     /// <summary>The schedule.</summary>
     public FitSchedule Schedule { get; }
 
-    /// <summary>Every source worker, by id.</summary>
+    /// <summary>Every worker, by id.</summary>
     public IEnumerable<WorkerDescriptor> Workers => _workers.Values.Select(w => w.Worker).OrderBy(w => w.Id, StringComparer.Ordinal);
 
     /// <summary>The class plan a worker belongs to.</summary>
@@ -54,43 +51,57 @@ public sealed class RunPlan
     /// <summary>A worker's descriptor.</summary>
     public WorkerDescriptor Worker(string workerId) => _workers[workerId].Worker;
 
-    /// <summary>The workers of a schedule group (empty for the noise group).</summary>
-    public IReadOnlyList<WorkerDescriptor> GroupWorkers(string group) =>
-        group == FitSchedule.NoiseGroup ? [] : Classes.SelectMany(c => c.Groups).Single(g => g.Name == group).Workers;
+    /// <summary>The workers of a schedule group.</summary>
+    public IReadOnlyList<WorkerDescriptor> GroupWorkers(string group) => Classes.SelectMany(c => c.Groups).Single(g => g.Name == group).Workers;
+
+    /// <summary>The worker that models the noise (<see cref="WorkerRole.Noise"/>).</summary>
+    public WorkerDescriptor NoiseWorker => Workers.Single(w => w.Role == WorkerRole.Noise);
+
+    /// <summary>The stages the coordinator walks, with the run's limits.</summary>
+    /// <param name="configDigest">Digest of the resolved configuration, for checkpoints.</param>
+    public StagePlan StagePlan(string configDigest) => new(
+        [.. Schedule.Stages.Select(groups => new Stage(groups, [.. groups.SelectMany(GroupWorkers).Select(w => new StageMember(w.Id, ClassOf(w.Id).ClassId, ClassOf(w.Id).StepsPerUpdate, w.Role))]))],
+        Settings.Iterations, Settings.CheckpointEvery, Settings.CheckpointMinutes, Settings.MaxWorkerFailures, configDigest);
 
     /// <summary>Reads and checks a run configuration file.</summary>
     /// <param name="configPath">The file.</param>
+    /// <param name="registry">The modules the configuration may use; <see cref="SourceClassRegistry.Default"/> when null.</param>
     /// <exception cref="InvalidInputException">Anything wrong with the file or its data, naming the key.</exception>
-    public static RunPlan Load(string configPath)
+    public static RunPlan Load(string configPath, SourceClassRegistry? registry = null)
     {
         var root = ConfigDocument.Load(configPath);
-        return FromConfig(root, Path.GetDirectoryName(Path.GetFullPath(configPath))!);
+        return FromConfig(root, Path.GetDirectoryName(Path.GetFullPath(configPath))!, registry);
     }
 
     /// <summary>Checks a parsed configuration.</summary>
     /// <param name="root">Its root table.</param>
     /// <param name="configFolder">Folder relative paths are taken from.</param>
-    public static RunPlan FromConfig(ConfigTable root, string configFolder) => FromConfig(root, configFolder, knownShape: null);
+    /// <param name="registry">The modules the configuration may use; <see cref="SourceClassRegistry.Default"/> when null.</param>
+    public static RunPlan FromConfig(ConfigTable root, string configFolder, SourceClassRegistry? registry = null) =>
+        FromConfig(root, configFolder, knownShape: null, registry);
 
     /// <summary>Checks a parsed configuration against <paramref name="knownShape"/> instead of its data file (which then
     /// need not exist): for validating shipped examples without their data.</summary>
-    internal static RunPlan FromConfig(ConfigTable root, string configFolder, FitDataShape? knownShape)
+    internal static RunPlan FromConfig(ConfigTable root, string configFolder, FitDataShape? knownShape, SourceClassRegistry? registry = null)
     {
         ArgumentNullException.ThrowIfNull(root);
-        foreach (string planned in FitSourceClasses.Planned)
+        registry ??= SourceClassRegistry.Default;
+        foreach (string planned in SourceClassRegistry.Planned)
             if (root.Has(planned))
-                throw root.Invalid(planned, $"source class '{planned}' has no implementation in this build yet; remove the section (implemented: {string.Join(", ", FitSourceClasses.All.Select(c => c.ClassId))})");
+                throw root.Invalid(planned, $"source class '{planned}' has no implementation in this build yet; remove the section (implemented: {string.Join(", ", registry.Ids)})");
         var settings = RunSettings.FromConfig(root, configFolder, requireData: knownShape is null);
         var shape = knownShape ?? ReadShape(settings.DataPath);
         var classes = new List<IFitSourceClassPlan>();
-        foreach (var sourceClass in FitSourceClasses.All)
-            if (root.GetTable(sourceClass.ClassId) is { } section)
-                classes.Add(sourceClass.Plan(section, shape));
-        var noiseTable = root.GetTable("noise") ?? EmptyTable(root, "noise");
-        var noise = NoiseFitSettings.FromConfig(noiseTable, shape);
+        foreach (var module in registry.Classes)
+        {
+            var section = root.GetTable(module.Id) ?? (module.RunsWithoutSection ? EmptyTable(root, module.Id) : null);
+            if (section is not null) classes.Add(module.PlanFit(section, shape));
+        }
+        if (classes.SelectMany(c => c.Groups).SelectMany(g => g.Workers).Count(w => w.Role == WorkerRole.Noise) != 1)
+            throw root.InvalidTable("a fit needs exactly one noise model worker");
         var schedule = FitSchedule.FromConfig(root.GetTable("schedule"), classes);
-        root.RejectUnknownKeys([.. RunSettings.Keys, "noise", "schedule", .. FitSourceClasses.All.Select(c => c.ClassId)]);
-        return new RunPlan(settings, shape, classes, noise, schedule);
+        root.RejectUnknownKeys([.. RunSettings.Keys, "schedule", .. registry.Ids]);
+        return new RunPlan(settings, shape, classes, schedule);
     }
 
     /// <summary>The resolved configuration (every default written out) for <c>RUN/run.toml</c>.</summary>
@@ -101,8 +112,6 @@ public sealed class RunPlan
         Settings.WriteResolved(writer);
         writer.Section("schedule");
         writer.Key("stages", Schedule.Stages.Select(s => (IEnumerable<string>)s));
-        writer.Section("noise");
-        Noise.WriteResolved(writer);
         foreach (var plan in Classes)
         {
             writer.Section(plan.ClassId);

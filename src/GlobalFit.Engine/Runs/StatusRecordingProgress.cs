@@ -1,5 +1,7 @@
 using System.Collections.Immutable;
 
+using GlobalFit.Engine.Orchestration;
+
 namespace GlobalFit.Engine.Runs;
 
 /// <summary>Passes progress on and keeps <c>RUN/status.json</c> up to date.</summary>

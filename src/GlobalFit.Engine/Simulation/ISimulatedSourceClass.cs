@@ -6,13 +6,9 @@ using GlobalFit.Physics.Noise;
 namespace GlobalFit.Engine.Simulation;
 
 /// <summary>A source class as the simulator sees it: it reads its own scenario section and injects its sources.
-/// The simulator never switches on the class; a new class registers one implementation in
-/// <see cref="SimulatedSourceClasses"/>.</summary>
+/// The simulator never switches on the class; the class's module (<see cref="SourceClasses.ISourceClass"/>) gives it.</summary>
 public interface ISimulatedSourceClass
 {
-    /// <summary>The class id: the scenario section name and the truth-table id (e.g. <c>galactic_binaries</c>).</summary>
-    string ClassId { get; }
-
     /// <summary>Reads and validates the class's scenario section against the observation it will be injected into.</summary>
     /// <exception cref="Physics.Input.InvalidInputException">A key is unknown, missing or invalid.</exception>
     ISourceInjection ReadScenario(ConfigTable section, ObservationSettings observation);

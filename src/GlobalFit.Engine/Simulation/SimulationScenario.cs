@@ -1,4 +1,5 @@
 using GlobalFit.Engine.Configuration;
+using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Physics.Constants;
 using GlobalFit.Physics.Noise;
 
@@ -14,18 +15,23 @@ namespace GlobalFit.Engine.Simulation;
 public sealed record SimulationScenario(string Name, ulong Seed, ObservationSettings Observation, NoiseSettings Noise, IReadOnlyList<ISourceInjection> Sources)
 {
     /// <summary>Builds a scenario from a parsed configuration file, rejecting unknown keys and invalid values.</summary>
+    /// <param name="root">The file's root table.</param>
+    /// <param name="registry">The classes whose sections the file may hold; <see cref="SourceClassRegistry.Default"/> when null.</param>
     /// <exception cref="Physics.Input.InvalidInputException">A key is unknown, missing, mistyped or out of range.</exception>
-    public static SimulationScenario FromConfig(ConfigTable root)
+    public static SimulationScenario FromConfig(ConfigTable root, SourceClassRegistry? registry = null)
     {
+        ArgumentNullException.ThrowIfNull(root);
+        registry ??= SourceClassRegistry.Default;
         string name = root.GetString("name", "unnamed scenario");
         long seed = root.GetInteger("seed", 1, 0, long.MaxValue);
         var observation = ObservationSettings.FromConfig(root.GetTable("observation") ?? throw root.InvalidTable("the [observation] table is required"));
         var noise = NoiseSettings.FromConfig(root.GetTable("noise"));
+        var simulated = registry.Classes.Where(c => c.Simulation is not null).ToList();
         var sources = new List<ISourceInjection>();
-        foreach (var sourceClass in SimulatedSourceClasses.All)
-            if (root.GetTable(sourceClass.ClassId) is { } section)
-                sources.Add(sourceClass.ReadScenario(section, observation));
-        root.RejectUnknownKeys(["name", "seed", "observation", "noise", .. SimulatedSourceClasses.All.Select(c => c.ClassId)]);
+        foreach (var sourceClass in simulated)
+            if (root.GetTable(sourceClass.Id) is { } section)
+                sources.Add(sourceClass.Simulation!.ReadScenario(section, observation));
+        root.RejectUnknownKeys(["name", "seed", "observation", "noise", .. simulated.Select(c => c.Id)]);
         return new SimulationScenario(name, (ulong)seed, observation, noise, sources);
     }
 

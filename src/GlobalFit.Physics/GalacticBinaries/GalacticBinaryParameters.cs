@@ -66,6 +66,20 @@ public readonly record struct GalacticBinaryParameters(
         EclipticLongitudeColumn, InclinationColumn, PolarisationColumn, InitialPhaseColumn,
     ];
 
+    /// <summary>The values of the eight <see cref="ColumnNames"/>, in that order: the one row layout of samples,
+    /// handovers and catalogue rows.</summary>
+    public double[] ToRow() =>
+        [FrequencyHz, FrequencyDerivativeHzS, Amplitude, EclipticLatitudeRad, EclipticLongitudeRad, InclinationRad, PolarisationRad, InitialPhaseRad];
+
+    /// <summary>The parameters of a row in <see cref="ColumnNames"/> order (f̈ = 0), the inverse of <see cref="ToRow"/>.</summary>
+    /// <param name="row">At least eight values.</param>
+    /// <exception cref="ArgumentException">The row holds fewer than eight values.</exception>
+    public static GalacticBinaryParameters FromRow(ReadOnlySpan<double> row)
+    {
+        if (row.Length < 8) throw new ArgumentException($"a row needs the {ColumnNames.Length} columns {string.Join(", ", ColumnNames)}, got {row.Length} values", nameof(row));
+        return new(row[0], row[1], row[2], row[3], row[4], row[5], row[6], row[7]);
+    }
+
     /// <summary>Throws unless every value is finite, f0 is positive, A is not negative and |β| ≤ π/2.</summary>
     /// <exception cref="ArgumentOutOfRangeException">A value is out of range; the parameter name is its column name.</exception>
     public void Validate()

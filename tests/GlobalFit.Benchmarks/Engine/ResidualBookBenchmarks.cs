@@ -23,7 +23,7 @@ public class ResidualBookBenchmarks
 
     /// <summary>One band worker's residual with its inverse PSDs (fresh arrays the worker keeps).</summary>
     [Benchmark]
-    public WorkerResidual CutResidual() => _workload.Book.ResidualFor(_id, includeT: false);
+    public WorkerResidual CutResidual() => _workload.Book.ResidualFor(_id);
 
     /// <summary>One template swapped in at a stage commit.</summary>
     [Benchmark]
@@ -31,5 +31,5 @@ public class ResidualBookBenchmarks
 
     /// <summary>The noise worker's input: data minus all 1000 templates over 0.1–30 mHz.</summary>
     [Benchmark]
-    public WindowSpectra FullResidual() => _workload.Book.FullResidual(_workload.NoiseBins);
+    public WorkerResidual FullResidual() => _workload.Book.ResidualFor(OrchestrationWorkload.NoiseWorkerId);
 }

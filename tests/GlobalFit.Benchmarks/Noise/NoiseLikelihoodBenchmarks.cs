@@ -1,5 +1,5 @@
 using BenchmarkDotNet.Attributes;
-using GlobalFit.Engine.NoiseFitting;
+using GlobalFit.Engine.SourceClasses.Noise;
 
 namespace GlobalFit.Benchmarks.Noise;
 

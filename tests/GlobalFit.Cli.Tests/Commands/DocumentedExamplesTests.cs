@@ -4,6 +4,7 @@ using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Simulation;
+using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 
 namespace GlobalFit.Cli.Tests.Commands;
 

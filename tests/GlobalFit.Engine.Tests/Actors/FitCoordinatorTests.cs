@@ -2,6 +2,8 @@ using Akka.Configuration;
 using GlobalFit.Engine.Actors;
 using GlobalFit.Engine.Runs;
 
+using GlobalFit.Engine.Orchestration;
+
 namespace GlobalFit.Engine.Tests.Actors;
 
 public sealed class FitCoordinatorTests : Akka.TestKit.Xunit2.TestKit

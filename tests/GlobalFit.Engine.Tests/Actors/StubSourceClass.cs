@@ -69,7 +69,7 @@ internal sealed class StubSourceClass : IFitSourceClassPlan
                 throw new InvalidOperationException($"stub failure of {id}");
             }
             _updates = next;
-            owner.Log.Enqueue(new UpdateRecord(id, _updates, residual.A[0]));
+            owner.Log.Enqueue(new UpdateRecord(id, _updates, residual.Spectra.A[0]));
             var block = new SampleBlock(id, Id, 0, ["x"], [1], [_updates + index / 10.0], [0.0]);
             return new WorkerUpdate(CurrentTemplate(), block, new WorkerStatistics(steps, _updates * steps, 1, -1.0, 0.5, TimeSpan.FromMilliseconds(1)));
         }

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Globalization;
 using System.Text.Json;
 using GlobalFit.Engine.Catalogue;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Physics.Input;
 using PureHDF;

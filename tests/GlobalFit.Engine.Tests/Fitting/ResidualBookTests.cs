@@ -27,32 +27,34 @@ public sealed class ResidualBookTests
 
         foreach (var (id, bins, t) in workers)
         {
-            var a = forward.ResidualFor(id, t);
-            var b = backward.ResidualFor(id, t);
-            Assert.Equal(a.A, b.A);
-            Assert.Equal(a.E, b.E);
+            var a = forward.ResidualFor(id);
+            var b = backward.ResidualFor(id);
+            Assert.Equal(a.Spectra.A, b.Spectra.A);
+            Assert.Equal(a.Spectra.E, b.Spectra.E);
             // Exact: the same canonical sum, d − h_other1 − h_other2 in ordinal order, computed here independently.
             for (int k = 0; k < bins.Count; k++)
             {
                 Complex expected = data.A[bins.First + k];
                 foreach (var (other, otherBins, _) in workers.OrderBy(w => w.Item1, StringComparer.Ordinal))
                     if (other != id && otherBins.Contains(bins.First + k)) expected -= templates[other].A[bins.First + k - otherBins.First];
-                Assert.Equal(expected, a.A[k]);
+                Assert.Equal(expected, a.Spectra.A[k]);
             }
         }
     }
 
     [Fact]
-    public void Full_residual_subtracts_every_template_and_leaves_t_of_a_worker_without_t_alone()
+    public void Noise_worker_residual_subtracts_every_template_and_leaves_t_of_a_worker_without_t_alone()
     {
         var data = RandomSpectra(Shape.BinCount, 2);
         var workers = new[] { ("w/a", new BinWindow(10, 40), true), ("w/c", new BinWindow(60, 30), false) };
-        var book = Book(data, workers);
+        var ones = Enumerable.Repeat(1.0, Shape.BinCount).ToArray();
+        var noise = new WorkerDescriptor("noise", new BinWindow(0, Shape.BinCount), "noise", true, WorkerRole.Noise);
+        var book = new ResidualBook(data, [.. Descriptors(workers), noise], ones, ones, ones);
         var ta = Template(workers[0].Item2, true, 3);
         var tc = Template(workers[1].Item2, false, 4);
         book.Replace("w/a", ta);
         book.Replace("w/c", tc);
-        var full = book.FullResidual(new BinWindow(0, Shape.BinCount));
+        var full = book.ResidualFor("noise").Spectra;
         Assert.Equal(data.A[5], full.A[5]);
         Assert.Equal(data.A[20] - ta.A[10], full.A[20]);
         Assert.Equal(data.E[70] - tc.E[10], full.E[70]);
@@ -67,9 +69,9 @@ public sealed class ResidualBookTests
         var book = Book(data, [("w/a", new BinWindow(10, 4), false)]);
         var inverse = Enumerable.Range(0, Shape.BinCount).Select(k => (double)k).ToArray();
         book.SetInversePsd(inverse, inverse, inverse);
-        var residual = book.ResidualFor("w/a", includeT: false);
+        var residual = book.ResidualFor("w/a");
         Assert.Equal([10.0, 11.0, 12.0, 13.0], residual.InverseA);
-        Assert.Null(residual.T);
+        Assert.Null(residual.Spectra.T);
         Assert.Null(residual.InverseT);
     }
 
@@ -83,6 +85,16 @@ public sealed class ResidualBookTests
     }
 
     [Fact]
+    public void A_noise_worker_holds_no_template()
+    {
+        var noise = new WorkerDescriptor("noise", new BinWindow(0, 16), "noise", false, WorkerRole.Noise);
+        var ones = Enumerable.Repeat(1.0, Shape.BinCount).ToArray();
+        var book = new ResidualBook(RandomSpectra(Shape.BinCount, 8), [noise], ones, ones, ones);
+        var error = Assert.Throws<ArgumentException>(() => book.Replace("noise", WindowSpectra.Zero(new BinWindow(0, 16), false)));
+        Assert.Contains("noise", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_worker_window_outside_the_data_is_refused()
     {
         var error = Assert.Throws<ArgumentException>(() => Book(RandomSpectra(Shape.BinCount, 7), [("w/a", new BinWindow(120, 20), false)]));
@@ -92,8 +104,11 @@ public sealed class ResidualBookTests
     private static ResidualBook Book(FitData data, IEnumerable<(string, BinWindow, bool)> workers)
     {
         var ones = Enumerable.Repeat(1.0, Shape.BinCount).ToArray();
-        return new ResidualBook(data, workers, ones, ones, ones);
+        return new ResidualBook(data, Descriptors(workers), ones, ones, ones);
     }
+
+    private static IEnumerable<WorkerDescriptor> Descriptors(IEnumerable<(string Id, BinWindow Bins, bool IncludesT)> workers) =>
+        workers.Select(w => new WorkerDescriptor(w.Id, w.Bins, w.Id, w.IncludesT));
 
     private static FitData RandomSpectra(int bins, int seed)
     {

@@ -5,6 +5,8 @@ using GlobalFit.Physics.Input;
 
 using GlobalFit.Tests.Shared;
 
+using GlobalFit.Engine.Orchestration;
+
 namespace GlobalFit.Engine.Tests.Runs;
 
 /// <summary>Whole fits through <see cref="FitRunner"/>: the real actors, workers, noise model, store and checkpoints on a

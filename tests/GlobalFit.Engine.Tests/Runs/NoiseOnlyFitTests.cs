@@ -1,6 +1,8 @@
 using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Tests.Catalogue;
 
+using GlobalFit.Engine.Orchestration;
+
 namespace GlobalFit.Engine.Tests.Runs;
 
 public sealed class NoiseOnlyFitTests

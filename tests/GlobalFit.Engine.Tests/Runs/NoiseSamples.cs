@@ -1,4 +1,5 @@
 using GlobalFit.Engine.Catalogue;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Runs;
 
 namespace GlobalFit.Engine.Tests.Runs;
@@ -9,7 +10,7 @@ internal static class NoiseSamples
     public static Dictionary<string, List<double>> After(RunFolderLayout layout, long burnIn)
     {
         var columns = new Dictionary<string, List<double>>(StringComparer.Ordinal);
-        foreach (var block in new CatalogueStore(layout.Root).Read("noise"))
+        foreach (var block in new SampleStore(layout.Root).Read("noise"))
         {
             if (block.Iteration <= burnIn) continue;
             int width = block.ParameterNames.Length;

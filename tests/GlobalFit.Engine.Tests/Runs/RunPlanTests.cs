@@ -28,9 +28,9 @@ public sealed class RunPlanTests(SharedFitData data) : IClassFixture<SharedFitDa
         var resolved = ConfigDocument.Parse(Plan("").ResolvedToml(), "run.toml");
         foreach (string key in RunSettings.Keys) Assert.True(resolved.Has(key), key);
         var noise = resolved.GetTable("noise")!;
-        foreach (string key in GlobalFit.Engine.NoiseFitting.NoiseFitSettings.Keys) Assert.True(noise.Has(key), "noise." + key);
+        foreach (string key in GlobalFit.Engine.SourceClasses.Noise.NoiseFitSettings.Keys) Assert.True(noise.Has(key), "noise." + key);
         var binaries = resolved.GetTable("galactic_binaries")!;
-        foreach (string key in GlobalFit.Engine.GalacticBinaryBands.GalacticBinaryBandSettings.Keys) Assert.True(binaries.Has(key), "galactic_binaries." + key);
+        foreach (string key in GlobalFit.Engine.SourceClasses.GalacticBinaries.GalacticBinaryBandSettings.Keys) Assert.True(binaries.Has(key), "galactic_binaries." + key);
     }
 
     [Fact]
@@ -59,8 +59,8 @@ public sealed class RunPlanTests(SharedFitData data) : IClassFixture<SharedFitDa
     [Fact]
     public void A_class_without_an_implementation_is_refused_naming_its_section()
     {
-        var error = Refused("", extra: "[massive_black_holes]\ncount = 1\n");
-        Assert.Contains("massive_black_holes", error.Message, StringComparison.Ordinal);
+        var error = Refused("", extra: "[massive_black_hole_binaries]\ncount = 1\n");
+        Assert.Contains("massive_black_hole_binaries", error.Message, StringComparison.Ordinal);
         Assert.Contains("no implementation", error.Message, StringComparison.Ordinal);
     }
 

@@ -1,0 +1,12 @@
+namespace GlobalFit.Engine.Orchestration;
+
+/// <summary>Receives a fit's progress. Called from the coordinator's thread: implementations must be quick and must
+/// not block.</summary>
+public interface IFitProgress
+{
+    /// <summary>An iteration completed.</summary>
+    void IterationCompleted(IterationReport report);
+
+    /// <summary>Something the user should know (a worker restarted, a checkpoint failed, a damaged checkpoint skipped).</summary>
+    void Warning(string message);
+}

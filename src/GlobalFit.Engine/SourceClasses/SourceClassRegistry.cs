@@ -1,0 +1,24 @@
+using GlobalFit.Engine.SourceClasses.GalacticBinaries;
+using GlobalFit.Engine.SourceClasses.Noise;
+
+namespace GlobalFit.Engine.SourceClasses;
+
+/// <summary>The modules a run may use, in the order their worker groups enter the default schedule. Everything that
+/// needs the set of classes (run plans, scenarios, catalogues, bench, demo) reads it from a registry, so adding a class
+/// is one line in <see cref="Default"/>, its folder, and its config section.</summary>
+/// <param name="Classes">The modules, ids unique.</param>
+public sealed record SourceClassRegistry(IReadOnlyList<ISourceClass> Classes)
+{
+    /// <summary>What this build implements: the one registration list.</summary>
+    public static SourceClassRegistry Default { get; } = new([new GalacticBinaryClass(), new NoiseClass()]);
+
+    /// <summary>Class ids the project names (see the design's "Names") whose module is not built yet; a configuration
+    /// that asks for one is refused with that reason rather than as an unknown section.</summary>
+    public static IReadOnlyList<string> Planned { get; } = ["massive_black_hole_binaries", "extreme_mass_ratio_inspirals"];
+
+    /// <summary>The module with id <paramref name="id"/>, or null.</summary>
+    public ISourceClass? Find(string id) => Classes.FirstOrDefault(c => c.Id == id);
+
+    /// <summary>The ids, in order.</summary>
+    public IEnumerable<string> Ids => Classes.Select(c => c.Id);
+}

@@ -1,6 +1,6 @@
 using System.CommandLine;
 using GlobalFit.Cli.Commands;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli;
 

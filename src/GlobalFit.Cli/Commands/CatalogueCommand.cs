@@ -2,7 +2,7 @@ using System.CommandLine;
 using GlobalFit.Engine.Catalogue;
 using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Runs;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Commands;
 

@@ -6,7 +6,7 @@ using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Simulation;
 using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Physics.DataFiles;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Commands;
 
@@ -47,7 +47,7 @@ public static class DemoCommand
 
         string scenarioPath = Path.Combine(full, "scenario.toml");
         File.WriteAllText(scenarioPath, DemoScenario.Toml);
-        var scenario = SimulationScenario.FromConfig(ConfigDocument.Parse(DemoScenario.Toml, "built-in demo scenario"));
+        var scenario = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Parse(DemoScenario.Toml, "built-in demo scenario"));
         context.Out.WriteLine($"demo: simulating \"{scenario.Name}\" into {full}");
         string dataPath = Path.Combine(full, "data.h5");
         int status = SimulateCommand.Run(context, scenario, scenarioPath, dataPath, force: true, json: false);

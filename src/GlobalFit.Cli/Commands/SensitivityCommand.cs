@@ -3,7 +3,7 @@ using System.Globalization;
 using System.Text;
 using GlobalFit.Cli.Console;
 using GlobalFit.Cli.Plotting;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 using GlobalFit.Physics.Noise;
 
 namespace GlobalFit.Cli.Commands;

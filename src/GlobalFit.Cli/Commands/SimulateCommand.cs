@@ -6,6 +6,8 @@ using GlobalFit.Engine.Simulation;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.DataFiles;
 
+using GlobalFit.Engine.SourceClasses;
+
 namespace GlobalFit.Cli.Commands;
 
 /// <summary><c>globalfit simulate SCENARIO.toml --out DATA.h5</c>: simulate an observation from a scenario file.</summary>
@@ -26,7 +28,7 @@ public static class SimulateCommand
     /// <summary>Simulates <paramref name="scenarioPath"/> into <paramref name="outputPath"/>; shared with <c>demo</c>.</summary>
     public static int Run(CliContext context, string scenarioPath, string outputPath, bool force, bool json)
     {
-        var scenario = SimulationScenario.FromConfig(ConfigDocument.Load(scenarioPath));
+        var scenario = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Load(scenarioPath));
         return Run(context, scenario, scenarioPath, outputPath, force, json);
     }
 

@@ -2,7 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Telemetry;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Commands;
 

@@ -1,7 +1,7 @@
 using System.Globalization;
 using System.Text;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Catalogue;
 

@@ -1,5 +1,5 @@
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 using PureHDF;
 using L = GlobalFit.Engine.Catalogue.CatalogueHdf5Layout;
 

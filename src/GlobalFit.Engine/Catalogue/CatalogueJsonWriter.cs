@@ -1,6 +1,6 @@
 using System.Text.Json;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Catalogue;
 

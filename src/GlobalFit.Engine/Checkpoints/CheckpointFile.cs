@@ -1,6 +1,6 @@
 using System.Buffers.Binary;
 using System.Security.Cryptography;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 using MessagePack;
 
 namespace GlobalFit.Engine.Checkpoints;

@@ -1,5 +1,4 @@
 using System.Collections.Immutable;
-using GlobalFit.Engine.Orchestration;
 using MessagePack;
 
 namespace GlobalFit.Engine.Checkpoints;
@@ -22,9 +21,4 @@ public sealed record RunCheckpoint(
 {
     /// <summary>The layout this build writes. Version 1 kept the noise worker's state apart from the others.</summary>
     public const int CurrentFormatVersion = 2;
-
-    /// <summary>Where the run stands according to this checkpoint.</summary>
-    public FitPosition Position() => new(Iteration, Iteration,
-        Workers.ToImmutableSortedDictionary(w => w.WorkerId, w => w.State, StringComparer.Ordinal),
-        Templates.ToImmutableSortedDictionary(t => t.WorkerId, t => t.ToSpectra(), StringComparer.Ordinal));
 }

@@ -1,5 +1,5 @@
 using System.Globalization;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Configuration;
 

@@ -1,6 +1,6 @@
 namespace GlobalFit.Engine.Fitting;
 
-/// <summary>A source leaving one worker for another of the same class between stages (e.g. a galactic binary whose
+/// <summary>A source leaving one worker for another of the same class between stages (e.g. a source whose
 /// frequency drifted into the neighbouring band).</summary>
 /// <param name="TargetWorkerId">The worker that should take it.</param>
 /// <param name="Payload">Class-specific bytes only the target's class reads.</param>

@@ -1,13 +1,14 @@
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
-using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Noise;
+
+using GlobalFit.Engine.SourceClasses;
 
 namespace GlobalFit.Engine.Inspection;
 
 /// <summary>Injected sources of one class: how many, and the spread of their optimal SNRs when recorded.</summary>
-/// <param name="ClassId">Source class id, e.g. <c>galactic_binaries</c>.</param>
+/// <param name="ClassId">Source class id (the truth table's name).</param>
 /// <param name="Count">Number of injected sources.</param>
 /// <param name="SnrMin">Smallest optimal SNR, or null when the table has no <c>snr</c> column.</param>
 /// <param name="SnrMedian">Median optimal SNR, or null.</param>
@@ -29,7 +30,7 @@ public sealed record ObservationInspection(
     IReadOnlyList<CrossChannelCheck> CrossChannels, IReadOnlyList<InjectedClassSummary> Injected)
 {
     /// <summary>Reads and analyses the file at <paramref name="path"/>.</summary>
-    /// <exception cref="Physics.Input.InvalidInputException">The file cannot be read or is invalid.</exception>
+    /// <exception cref="Physics.Files.InvalidInputException">The file cannot be read or is invalid.</exception>
     public static ObservationInspection Run(string path)
     {
         var observation = ObservationFile.Read(path);
@@ -53,7 +54,7 @@ public sealed record ObservationInspection(
     {
         if (observation.Provenance.Entries.TryGetValue(ObservationSimulator.ScenarioProvenanceKey, out var toml))
         {
-            var scenario = SimulationScenario.FromConfig(ConfigDocument.Parse(toml, $"{path} (provenance {ObservationSimulator.ScenarioProvenanceKey})"));
+            var scenario = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Parse(toml, $"{path} (provenance {ObservationSimulator.ScenarioProvenanceKey})"));
             return (scenario.Noise.Model(), $"noise model of the file's scenario \"{scenario.Name}\"");
         }
         return (new AetNoiseModel(InstrumentNoiseSettings.Default), "default instrument noise (the file records no scenario)");

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Fitting;
 
 namespace GlobalFit.Engine.Orchestration;
@@ -20,5 +21,14 @@ public sealed record FitPosition(long Iteration, long CheckpointIteration, Immut
         return new FitPosition(0, 0,
             list.ToImmutableSortedDictionary(w => w.Id, _ => (byte[]?)null, StringComparer.Ordinal),
             list.Where(w => w.Role == WorkerRole.Sources).ToImmutableSortedDictionary(w => w.Id, w => WindowSpectra.Zero(w.Bins, w.IncludesT), StringComparer.Ordinal));
+    }
+
+    /// <summary>Where the run stands according to <paramref name="checkpoint"/>.</summary>
+    public static FitPosition From(RunCheckpoint checkpoint)
+    {
+        ArgumentNullException.ThrowIfNull(checkpoint);
+        return new(checkpoint.Iteration, checkpoint.Iteration,
+            checkpoint.Workers.ToImmutableSortedDictionary(w => w.WorkerId, w => w.State, StringComparer.Ordinal),
+            checkpoint.Templates.ToImmutableSortedDictionary(t => t.WorkerId, t => t.ToSpectra(), StringComparer.Ordinal));
     }
 }

@@ -9,7 +9,7 @@ using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Engine.Telemetry;
 using GlobalFit.Physics.DataFiles;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 using GlobalFit.Engine.Orchestration;
 
@@ -62,7 +62,7 @@ public static class FitRunner
             var checkpoint = CheckpointFile.Read(layout.Root, options.Progress.Warning);
             if (checkpoint.ConfigDigest != digest)
                 throw new InvalidInputException(layout.ResolvedConfig, null, "run.toml was edited after the checkpoint was written; restore it or start a new fit");
-            start = checkpoint.Position();
+            start = FitPosition.From(checkpoint);
         }
         else
         {

@@ -17,7 +17,7 @@ public sealed record FitSchedule(ImmutableArray<ImmutableArray<string>> Stages)
     /// checks that every group of <paramref name="classes"/> appears exactly once.</summary>
     /// <param name="table">The <c>[schedule]</c> table, or null for the default schedule.</param>
     /// <param name="classes">The planned classes.</param>
-    /// <exception cref="Physics.Input.InvalidInputException">A group is unknown, repeated or missing; the message names
+    /// <exception cref="Physics.Files.InvalidInputException">A group is unknown, repeated or missing; the message names
     /// the key.</exception>
     public static FitSchedule FromConfig(ConfigTable? table, IReadOnlyList<IFitSourceClassPlan> classes)
     {

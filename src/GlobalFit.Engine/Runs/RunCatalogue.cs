@@ -3,7 +3,7 @@ using GlobalFit.Engine.Catalogue;
 using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Runs;
 

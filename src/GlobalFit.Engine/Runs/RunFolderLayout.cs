@@ -6,12 +6,12 @@ public sealed record RunFolderLayout(string Root)
 {
     /// <summary>The layout of an existing run folder: one that holds the <c>run.toml</c> a fit writes first.</summary>
     /// <param name="folder">The folder, absolute or relative.</param>
-    /// <exception cref="Physics.Input.InvalidInputException">The folder holds no run.</exception>
+    /// <exception cref="Physics.Files.InvalidInputException">The folder holds no run.</exception>
     public static RunFolderLayout OpenExisting(string folder)
     {
         var layout = new RunFolderLayout(Path.GetFullPath(folder));
         if (!File.Exists(layout.ResolvedConfig))
-            throw new Physics.Input.InvalidInputException(layout.Root, null, "not a run folder (no run.toml); start a fit with 'globalfit fit CONFIG.toml'");
+            throw new Physics.Files.InvalidInputException(layout.Root, null, "not a run folder (no run.toml); start a fit with 'globalfit fit CONFIG.toml'");
         return layout;
     }
 

@@ -3,7 +3,7 @@ using GlobalFit.Engine.Fitting;
 using GlobalFit.Engine.Orchestration;
 using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Physics.DataFiles;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Runs;
 

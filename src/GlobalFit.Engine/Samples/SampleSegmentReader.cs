@@ -1,7 +1,7 @@
 using System.Buffers.Binary;
 using System.Globalization;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 using MessagePack;
 
 namespace GlobalFit.Engine.Samples;

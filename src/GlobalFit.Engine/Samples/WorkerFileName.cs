@@ -3,8 +3,8 @@ using System.Text;
 
 namespace GlobalFit.Engine.Samples;
 
-/// <summary>Maps a worker id (e.g. <c>galactic_binaries/0042</c>) to the name of its sample file in <c>RUN/chains/</c>
-/// (<c>galactic_binaries.0042.samples</c>) and back.</summary>
+/// <summary>Maps a worker id (<c>class_id/label</c>) to the name of its sample file in <c>RUN/chains/</c>
+/// (<c>class_id.label.samples</c>) and back.</summary>
 /// <remarks>Lower-case letters, digits, <c>_</c> and <c>-</c> are kept; <c>/</c> becomes <c>.</c>; every other byte of the
 /// id's UTF-8 form (upper case included, so that ids differing only in case never share a file on a case-insensitive
 /// file system) becomes <c>%XX</c>. A leading <c>/</c> is escaped too, so no file is hidden. The mapping is therefore

@@ -10,7 +10,7 @@ namespace GlobalFit.Engine.Simulation;
 public interface ISimulatedSourceClass
 {
     /// <summary>Reads and validates the class's scenario section against the observation it will be injected into.</summary>
-    /// <exception cref="Physics.Input.InvalidInputException">A key is unknown, missing or invalid.</exception>
+    /// <exception cref="Physics.Files.InvalidInputException">A key is unknown, missing or invalid.</exception>
     ISourceInjection ReadScenario(ConfigTable section, ObservationSettings observation);
 }
 

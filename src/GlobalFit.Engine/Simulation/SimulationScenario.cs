@@ -1,5 +1,4 @@
 using GlobalFit.Engine.Configuration;
-using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Physics.Constants;
 using GlobalFit.Physics.Noise;
 
@@ -16,22 +15,22 @@ public sealed record SimulationScenario(string Name, ulong Seed, ObservationSett
 {
     /// <summary>Builds a scenario from a parsed configuration file, rejecting unknown keys and invalid values.</summary>
     /// <param name="root">The file's root table.</param>
-    /// <param name="registry">The classes whose sections the file may hold; <see cref="SourceClassRegistry.Default"/> when null.</param>
-    /// <exception cref="Physics.Input.InvalidInputException">A key is unknown, missing, mistyped or out of range.</exception>
-    public static SimulationScenario FromConfig(ConfigTable root, SourceClassRegistry? registry = null)
+    /// <param name="classes">The source classes whose sections the file may hold, by id, in injection order (the
+    /// registry's <c>Simulated</c> list).</param>
+    /// <exception cref="Physics.Files.InvalidInputException">A key is unknown, missing, mistyped or out of range.</exception>
+    public static SimulationScenario FromConfig(ConfigTable root, IReadOnlyList<KeyValuePair<string, ISimulatedSourceClass>> classes)
     {
         ArgumentNullException.ThrowIfNull(root);
-        registry ??= SourceClassRegistry.Default;
+        ArgumentNullException.ThrowIfNull(classes);
         string name = root.GetString("name", "unnamed scenario");
         long seed = root.GetInteger("seed", 1, 0, long.MaxValue);
         var observation = ObservationSettings.FromConfig(root.GetTable("observation") ?? throw root.InvalidTable("the [observation] table is required"));
         var noise = NoiseSettings.FromConfig(root.GetTable("noise"));
-        var simulated = registry.Classes.Where(c => c.Simulation is not null).ToList();
         var sources = new List<ISourceInjection>();
-        foreach (var sourceClass in simulated)
-            if (root.GetTable(sourceClass.Id) is { } section)
-                sources.Add(sourceClass.Simulation!.ReadScenario(section, observation));
-        root.RejectUnknownKeys(["name", "seed", "observation", "noise", .. simulated.Select(c => c.Id)]);
+        foreach (var (id, simulation) in classes)
+            if (root.GetTable(id) is { } section)
+                sources.Add(simulation.ReadScenario(section, observation));
+        root.RejectUnknownKeys(["name", "seed", "observation", "noise", .. classes.Select(c => c.Key)]);
         return new SimulationScenario(name, (ulong)seed, observation, noise, sources);
     }
 
@@ -92,7 +91,7 @@ public sealed record ObservationSettings(double DurationS, double CadenceS, doub
     }
 }
 
-/// <summary>Instrument noise levels and the optional galactic confusion foreground of a scenario.</summary>
+/// <summary>Instrument noise levels and the optional Galactic confusion foreground of a scenario.</summary>
 /// <param name="Instrument">Acceleration and optical-metrology levels and the arm length.</param>
 /// <param name="Foreground">The confusion foreground (published fit and amplitude), or null for none.</param>
 public sealed record NoiseSettings(InstrumentNoiseSettings Instrument, GalacticConfusionSettings? Foreground)

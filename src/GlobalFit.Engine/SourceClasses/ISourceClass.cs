@@ -6,8 +6,7 @@ using GlobalFit.Engine.Simulation;
 
 namespace GlobalFit.Engine.SourceClasses;
 
-/// <summary>One module of the global fit under one id: a source class (galactic binaries, massive black-hole
-/// binaries, inspirals) or the noise model. It gives the program everything it needs of the class: its run
+/// <summary>One module of the global fit under one id: a source class or the noise model. It gives the program everything it needs of the class: its run
 /// configuration section as a plan and workers, its scenario section as injections and a truth table, its samples as
 /// catalogue rows, its parameter columns, its bench figures and its part of the demo. The engine and the CLI never
 /// switch on the class; a module is one folder and one line of <see cref="SourceClassRegistry.Default"/>.</summary>
@@ -39,7 +38,7 @@ public interface ISourceClass
     /// <see cref="RunsWithoutSection"/>).</param>
     /// <param name="shape">The data record.</param>
     /// <returns>The plan.</returns>
-    /// <exception cref="Physics.Input.InvalidInputException">A key is malformed or cannot work with the data; the
+    /// <exception cref="Physics.Files.InvalidInputException">A key is malformed or cannot work with the data; the
     /// message names it.</exception>
     IFitSourceClassPlan PlanFit(ConfigTable section, FitDataShape shape);
 }

@@ -1,3 +1,5 @@
+using GlobalFit.Engine.Configuration;
+using GlobalFit.Engine.Simulation;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Engine.SourceClasses.Noise;
 
@@ -18,6 +20,14 @@ public sealed record SourceClassRegistry(IReadOnlyList<ISourceClass> Classes)
 
     /// <summary>The module with id <paramref name="id"/>, or null.</summary>
     public ISourceClass? Find(string id) => Classes.FirstOrDefault(c => c.Id == id);
+
+    /// <summary>The classes the simulator can inject, by id, in registration order.</summary>
+    public IReadOnlyList<KeyValuePair<string, ISimulatedSourceClass>> Simulated =>
+        [.. Classes.Where(c => c.Simulation is not null).Select(c => new KeyValuePair<string, ISimulatedSourceClass>(c.Id, c.Simulation!))];
+
+    /// <summary>Reads a scenario whose class sections are this registry's.</summary>
+    /// <param name="root">The scenario file's root table.</param>
+    public SimulationScenario ReadScenario(ConfigTable root) => SimulationScenario.FromConfig(root, Simulated);
 
     /// <summary>The ids, in order.</summary>
     public IEnumerable<string> Ids => Classes.Select(c => c.Id);

@@ -31,7 +31,7 @@ public static class FitTelemetry
     /// <summary>The worker-group names of the stage (text list).</summary>
     public const string StageGroupsAttribute = "globalfit.stage.groups";
 
-    /// <summary>The worker id, e.g. <c>galactic_binaries/0042</c>.</summary>
+    /// <summary>The worker id, <c>class_id/label</c>.</summary>
     public const string WorkerIdAttribute = "globalfit.worker.id";
 
     /// <summary>The worker's source class.</summary>

@@ -1,5 +1,5 @@
 using System.Text;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Telemetry;
 

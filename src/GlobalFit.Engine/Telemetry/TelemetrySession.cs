@@ -1,4 +1,4 @@
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 using OpenTelemetry;
 using OpenTelemetry.Exporter;
 using OpenTelemetry.Metrics;

@@ -1,6 +1,6 @@
 using System.Globalization;
 using System.Text.Json;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Telemetry;
 

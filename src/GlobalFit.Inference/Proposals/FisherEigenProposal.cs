@@ -10,7 +10,7 @@ namespace GlobalFit.Inference.Proposals;
 /// <remarks>
 /// <para>The Fisher matrix approximates the inverse posterior covariance of a high-SNR signal, so its
 /// eigenvectors v_i and eigenvalues λ_i give natural jump directions and scales (Cornish &amp; Crowder 2005,
-/// Phys. Rev. D 72, 043005, §III; Littenberg &amp; Cornish 2009 use the same move for galactic binaries).
+/// Phys. Rev. D 72, 043005, §III; Littenberg &amp; Cornish 2009 use the same move for binaries of the Galaxy).
 /// At inverse temperature β the likelihood is flattened, so steps grow by 1/√β; β is floored at 10⁻⁶ and
 /// eigenvalues at 10⁻¹² of the largest so that steps stay finite.</para>
 /// <para>The matrix is computed at the chain's current point on the first proposal and then every

@@ -1,4 +1,4 @@
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 using PureHDF;
 
 namespace GlobalFit.Physics.DataFiles;

@@ -1,5 +1,5 @@
 using System.Globalization;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 using GlobalFit.Physics.Series;
 using PureHDF;
 using PureHDF.VOL.Native;
@@ -283,7 +283,7 @@ internal sealed class ObservationFileReader : IDisposable
             if (child is not IH5Group group)
                 throw _input.Error(path, "is not a group; each source class has a group holding 'values' and 'ids'");
             if (!SnakeCaseName.IsValid(child.Name))
-                throw _input.Error(path, $"'{child.Name}' is not a snake_case class id such as galactic_binaries");
+                throw _input.Error(path, $"'{child.Name}' is not a snake_case class id such as class_id");
             groups.Add((child.Name, group, path));
         }
         return groups;

@@ -3,7 +3,7 @@ using System.Text.RegularExpressions;
 namespace GlobalFit.Physics.DataFiles;
 
 /// <summary>The plain names used for source-class ids and table columns: lower-case words joined by single underscores.</summary>
-/// <remarks>Examples: <c>galactic_binaries</c>, <c>f0_hz</c>, <c>fdot_hz_s</c>. Such names are valid HDF5 link names,
+/// <remarks>Examples: <c>class_id</c>, <c>f0_hz</c>, <c>fdot_hz_s</c>. Such names are valid HDF5 link names,
 /// Python identifiers and TOML keys, so they survive every file format the project writes.</remarks>
 public static partial class SnakeCaseName
 {

@@ -3,7 +3,7 @@ namespace GlobalFit.Physics.DataFiles;
 /// <summary>The injected sources of one source class: one row per source, one named column per parameter.</summary>
 /// <remarks>
 /// <para>The table is generic so that every source class stores its injections the same way: the class id
-/// (e.g. <c>galactic_binaries</c>) names the table, <see cref="Columns"/> name the parameters in order
+/// names the table, <see cref="Columns"/> name the parameters in order
 /// (e.g. <c>f0_hz</c>, <c>fdot_hz_s</c>, <c>amp</c>, …, <c>snr</c>; architecture.md "Names"), and each row has a
 /// string id. Values may be NaN where a quantity is unknown (e.g. an SNR that was not computed).</para>
 /// <para>Immutable: the value array is owned by the table once handed over. Safe to share between threads.</para>
@@ -26,7 +26,7 @@ public sealed class TruthTable
         ArgumentNullException.ThrowIfNull(ids);
         ArgumentNullException.ThrowIfNull(values);
         if (!SnakeCaseName.IsValid(classId))
-            throw new ArgumentException($"class id '{classId}' is not a snake_case name such as galactic_binaries");
+            throw new ArgumentException($"class id '{classId}' is not a snake_case name such as class_id");
         _columns = columns.ToArray();
         _ids = ids.ToArray();
         if (_columns.Length == 0)
@@ -53,7 +53,7 @@ public sealed class TruthTable
         _values = values;
     }
 
-    /// <summary>The source-class id, e.g. <c>galactic_binaries</c>.</summary>
+    /// <summary>The source-class id.</summary>
     public string ClassId { get; }
 
     /// <summary>Parameter names in column order.</summary>

@@ -1,6 +1,6 @@
 namespace GlobalFit.Physics.Detector;
 
-/// <summary>The plane wave of a circular galactic binary with a linear frequency drift.</summary>
+/// <summary>The plane wave of a circular binary with a linear frequency drift.</summary>
 /// <remarks>
 /// shared/reference/detector-noise-gb.md §F.1 (leading quadrupole order): <c>Φ(t) = φ0 + 2π f0 t + π ḟ t²</c>,
 /// <c>h+ = A(1 + cos²ι) cos Φ</c>, <c>h× = 2A cos ι sin Φ</c>, with t the retarded time at the Sun. The second

@@ -55,7 +55,7 @@ public static class SlowReferenceResponse
             new TimeSeries(t0Seconds, dtSeconds, z));
     }
 
-    /// <summary>Computes the response to a galactic binary, taking sky position and polarisation from it.</summary>
+    /// <summary>Computes the response to a monochromatic binary, taking sky position and polarisation from it.</summary>
     /// <exception cref="ArgumentOutOfRangeException">As for the general overload.</exception>
     public static TdiResponse Compute(MonochromaticBinaryStrain binary, IConstellationOrbits orbits, double t0Seconds, double dtSeconds, int count)
     {

@@ -1,7 +1,7 @@
 namespace GlobalFit.Physics.Noise;
 
 /// <summary>
-/// The noise model the rest of globalfit uses: instrument noise in A, E, T plus, optionally, the galactic
+/// The noise model the rest of globalfit uses: instrument noise in A, E, T plus, optionally, the Galactic
 /// confusion foreground mapped into each channel. All PSDs are one-sided, in fractional-frequency units.
 /// </summary>
 /// <remarks>

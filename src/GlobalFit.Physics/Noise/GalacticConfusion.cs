@@ -1,7 +1,7 @@
 namespace GlobalFit.Physics.Noise;
 
 /// <summary>
-/// The galactic white-dwarf confusion foreground as a sky-averaged strain PSD <c>S_c(f)</c> in the
+/// The Galactic white-dwarf confusion foreground as a sky-averaged strain PSD <c>S_c(f)</c> in the
 /// convention of Robson, Cornish &amp; Liu (additive to their sensitivity <c>S_n</c>).
 /// </summary>
 /// <remarks>

@@ -3,7 +3,7 @@ using System.Globalization;
 namespace GlobalFit.Physics.Noise;
 
 /// <summary>
-/// Which galactic-confusion fit to use (observation time) and how strongly (amplitude multiplier).
+/// Which Galactic-confusion fit to use (observation time) and how strongly (amplitude multiplier).
 /// Validated on creation and immutable.
 /// </summary>
 /// <remarks>Only the durations tabulated by Robson, Cornish &amp; Liu 2019 (CQG 36, 105011,

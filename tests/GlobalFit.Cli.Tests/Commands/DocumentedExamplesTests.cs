@@ -6,6 +6,8 @@ using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Simulation;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 
+using GlobalFit.Engine.SourceClasses;
+
 namespace GlobalFit.Cli.Tests.Commands;
 
 /// <summary>The examples users copy from (configs/ and README) must stay valid.</summary>
@@ -23,7 +25,7 @@ public class DocumentedExamplesTests
     [MemberData(nameof(ScenarioFiles))]
     public void Every_shipped_scenario_is_valid(string file)
     {
-        var scenario = SimulationScenario.FromConfig(ConfigDocument.Load(RepositoryFiles.PathOf(Path.Combine("configs", file))));
+        var scenario = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Load(RepositoryFiles.PathOf(Path.Combine("configs", file))));
         Assert.True(scenario.Observation.SampleCount > 0);
     }
 
@@ -33,8 +35,8 @@ public class DocumentedExamplesTests
         string readme = File.ReadAllText(RepositoryFiles.PathOf("README.md"));
         var block = Regex.Match(readme, "```toml\n(?<body>name = .*?)```", RegexOptions.Singleline);
         Assert.True(block.Success, "README has no TOML example");
-        var fromReadme = SimulationScenario.FromConfig(ConfigDocument.Parse(block.Groups["body"].Value, "README.md"));
-        var shipped = SimulationScenario.FromConfig(ConfigDocument.Load(RepositoryFiles.PathOf("configs/scenario-noise-month.toml")));
+        var fromReadme = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Parse(block.Groups["body"].Value, "README.md"));
+        var shipped = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Load(RepositoryFiles.PathOf("configs/scenario-noise-month.toml")));
         Assert.Equal(shipped.ToToml(), fromReadme.ToToml());
     }
 
@@ -44,7 +46,7 @@ public class DocumentedExamplesTests
         string readme = File.ReadAllText(RepositoryFiles.PathOf("README.md"));
         var block = Regex.Match(readme, "```toml\n(?<body>\\[galactic_binaries.*?)```", RegexOptions.Singleline);
         Assert.True(block.Success, "README has no galactic-binary example");
-        var scenario = SimulationScenario.FromConfig(ConfigDocument.Parse("[observation]\nduration_days = 2\n" + block.Groups["body"].Value, "README.md"));
+        var scenario = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Parse("[observation]\nduration_days = 2\n" + block.Groups["body"].Value, "README.md"));
         Assert.Single(scenario.Sources);
     }
 

@@ -4,7 +4,7 @@ using System.Text.Json;
 using GlobalFit.Engine.Catalogue;
 using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 using PureHDF;
 
 namespace GlobalFit.Engine.Tests.Catalogue;

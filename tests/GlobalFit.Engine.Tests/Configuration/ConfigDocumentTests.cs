@@ -1,5 +1,5 @@
 using GlobalFit.Engine.Configuration;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Tests.Configuration;
 

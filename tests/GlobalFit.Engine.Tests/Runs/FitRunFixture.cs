@@ -6,6 +6,8 @@ using GlobalFit.Physics.DataFiles;
 
 using GlobalFit.Engine.Orchestration;
 
+using GlobalFit.Engine.SourceClasses;
+
 namespace GlobalFit.Engine.Tests.Runs;
 
 /// <summary>Simulation and fitting helpers for end-to-end fits through <see cref="FitRunner"/> (the record and configuration
@@ -15,7 +17,7 @@ internal static class FitRunFixture
     /// <summary>Simulates <paramref name="scenarioToml"/> into <paramref name="path"/>.</summary>
     public static void Simulate(string scenarioToml, string path)
     {
-        var scenario = SimulationScenario.FromConfig(ConfigDocument.Parse(scenarioToml, "test scenario"));
+        var scenario = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Parse(scenarioToml, "test scenario"));
         ObservationFile.Write(ObservationSimulator.Simulate(scenario, "globalfit tests", new Dictionary<string, string>(), null), path, overwrite: false);
     }
 

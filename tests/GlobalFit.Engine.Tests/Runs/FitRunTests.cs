@@ -1,7 +1,7 @@
 using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Tests.Catalogue;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 using GlobalFit.Tests.Shared;
 

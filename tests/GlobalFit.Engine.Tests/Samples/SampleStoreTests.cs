@@ -1,7 +1,7 @@
 using GlobalFit.Engine.Tests.Catalogue;
 using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Tests.Samples;
 

@@ -1,13 +1,15 @@
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
+
+using GlobalFit.Engine.SourceClasses;
 
 namespace GlobalFit.Engine.Tests.Simulation;
 
 public class SimulationScenarioTests
 {
-    private static SimulationScenario Parse(string text) => SimulationScenario.FromConfig(ConfigDocument.Parse(text, "scenario.toml"));
+    private static SimulationScenario Parse(string text) => SourceClassRegistry.Default.ReadScenario(ConfigDocument.Parse(text, "scenario.toml"));
 
     [Fact]
     public void Defaults_fill_every_unspecified_setting()

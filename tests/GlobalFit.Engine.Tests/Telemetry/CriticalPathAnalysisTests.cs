@@ -1,6 +1,6 @@
 using GlobalFit.Engine.Telemetry;
 using GlobalFit.Engine.Tests.Catalogue;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Tests.Telemetry;
 

@@ -2,7 +2,7 @@ using System.Diagnostics;
 using System.Text.Json;
 using GlobalFit.Engine.Telemetry;
 using GlobalFit.Engine.Tests.Catalogue;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Tests.Telemetry;
 

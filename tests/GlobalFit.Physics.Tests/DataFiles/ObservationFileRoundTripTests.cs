@@ -114,7 +114,7 @@ public class ObservationFileRoundTripTests
         tree.Write(path);
 
         Assert.Equal(16, ObservationFile.ReadSummary(path).SampleCount);
-        Assert.Throws<Physics.Input.InvalidInputException>(() => ObservationFile.Read(path));
+        Assert.Throws<Physics.Files.InvalidInputException>(() => ObservationFile.Read(path));
     }
 
     [Fact]

@@ -1,5 +1,5 @@
 using GlobalFit.Physics.DataFiles;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 using Xunit;
 
 namespace GlobalFit.Physics.Tests.DataFiles;

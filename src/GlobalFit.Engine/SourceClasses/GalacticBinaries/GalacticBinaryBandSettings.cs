@@ -102,7 +102,7 @@ public sealed record GalacticBinaryBandSettings
     /// <param name="table">The table.</param>
     /// <param name="generator">Template generator of the data record (duration, cadence, envelope rule).</param>
     /// <returns>The settings and the band plan they give.</returns>
-    /// <exception cref="Physics.Input.InvalidInputException">A key is malformed, out of range or inconsistent with the record;
+    /// <exception cref="Physics.Files.InvalidInputException">A key is malformed, out of range or inconsistent with the record;
     /// the message names the key and its position.</exception>
     public static (GalacticBinaryBandSettings Settings, GalacticBinaryBandPlan Plan) FromConfig(ConfigTable table, GalacticBinaryTemplateGenerator generator)
     {

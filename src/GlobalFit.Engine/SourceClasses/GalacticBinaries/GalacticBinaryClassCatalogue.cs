@@ -1,7 +1,6 @@
 using System.Collections.Immutable;
 using System.Globalization;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.GalacticBinaries;
 using GlobalFit.Physics.Noise;
 using GlobalFit.Physics.Series;

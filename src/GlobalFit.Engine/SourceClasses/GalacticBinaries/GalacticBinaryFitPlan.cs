@@ -1,7 +1,5 @@
 using System.Collections.Immutable;
 using System.Globalization;
-using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Physics.GalacticBinaries;

@@ -32,7 +32,7 @@ public sealed record NoiseFitSettings
     /// <summary>Whether the levels are sampled [<c>fit_levels</c>]; when false they stay at the starting values.</summary>
     public bool FitLevels { get; init; } = true;
 
-    /// <summary>Whether the model includes the galactic confusion foreground in A and E [<c>foreground</c>].</summary>
+    /// <summary>Whether the model includes the Galactic confusion foreground in A and E [<c>foreground</c>].</summary>
     public bool Foreground { get; init; } = true;
 
     /// <summary>Which tabulated foreground shape to use [<c>foreground_fit_years</c>].</summary>
@@ -92,7 +92,7 @@ public sealed record NoiseFitSettings
     /// <param name="table">The table.</param>
     /// <param name="shape">The data record.</param>
     /// <returns>The settings, defaults filled in.</returns>
-    /// <exception cref="Physics.Input.InvalidInputException">A key is unknown, malformed, out of range or
+    /// <exception cref="Physics.Files.InvalidInputException">A key is unknown, malformed, out of range or
     /// inconsistent with the record; the message names the key.</exception>
     public static NoiseFitSettings FromConfig(ConfigTable table, FitDataShape shape)
     {

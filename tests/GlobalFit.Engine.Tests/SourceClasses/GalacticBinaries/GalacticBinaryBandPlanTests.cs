@@ -2,7 +2,7 @@ using System.Diagnostics;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.GalacticBinaries;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Tests.SourceClasses.GalacticBinaries;
 

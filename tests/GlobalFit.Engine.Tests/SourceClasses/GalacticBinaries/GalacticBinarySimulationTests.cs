@@ -3,8 +3,10 @@ using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.GalacticBinaries;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 using GlobalFit.Physics.Series;
+
+using GlobalFit.Engine.SourceClasses;
 
 namespace GlobalFit.Engine.Tests.SourceClasses.GalacticBinaries;
 
@@ -30,7 +32,7 @@ public class GalacticBinarySimulationTests
         phi0_rad = 1.1
         """;
 
-    private static SimulationScenario Parse(string text) => SimulationScenario.FromConfig(ConfigDocument.Parse(text, "scenario.toml"));
+    private static SimulationScenario Parse(string text) => SourceClassRegistry.Default.ReadScenario(ConfigDocument.Parse(text, "scenario.toml"));
 
     private static Physics.DataFiles.Observation Simulate(string text) =>
         ObservationSimulator.Simulate(Parse(text), "test", new Dictionary<string, string>(), null);

@@ -2,7 +2,7 @@ using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Engine.SourceClasses.Noise;
 using GlobalFit.Physics.Constants;
-using GlobalFit.Physics.Input;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Tests.SourceClasses.Noise;
 

@@ -1,4 +1,4 @@
-namespace GlobalFit.Physics.Input;
+namespace GlobalFit.Physics.Files;
 
 /// <summary>
 /// Bad input from a user's file or option: thrown with enough context to fix it (the file, and the

@@ -1,5 +1,5 @@
 
-namespace GlobalFit.Physics.Input;
+namespace GlobalFit.Physics.Files;
 
 /// <summary>Writes a file so that readers see either the old file or the complete new one, never a half-written file.</summary>
 /// <remarks>The content goes to a hidden temporary file in the destination folder (same file system, so the

@@ -1,4 +1,5 @@
 using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.SourceClasses;
 
 namespace GlobalFit.Engine.Runs;
 
@@ -6,4 +7,9 @@ namespace GlobalFit.Engine.Runs;
 /// <param name="Progress">Receives progress and warnings.</param>
 /// <param name="OtlpEndpoint">OTLP collector to export telemetry to as well, or null (telemetry.jsonl is always written).</param>
 /// <param name="Cancellation">Cancelling checkpoints the last complete iteration and stops.</param>
-public sealed record FitRunOptions(IFitProgress Progress, Uri? OtlpEndpoint, CancellationToken Cancellation);
+public sealed record FitRunOptions(IFitProgress Progress, Uri? OtlpEndpoint, CancellationToken Cancellation)
+{
+    /// <summary>The modules the run's configuration may use (<see cref="SourceClassRegistry.Default"/> unless a test
+    /// or an embedding program adds its own).</summary>
+    public SourceClassRegistry Registry { get; init; } = SourceClassRegistry.Default;
+}

@@ -27,7 +27,7 @@ public static class FitRunner
     public static FitOutcome Start(string configPath, FitRunOptions options)
     {
         ArgumentNullException.ThrowIfNull(options);
-        var plan = RunPlan.Load(configPath);
+        var plan = RunPlan.Load(configPath, options.Registry);
         var layout = new RunFolderLayout(plan.Settings.RunFolder);
         if (File.Exists(layout.ResolvedConfig))
             throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} holds another run; continue it with 'globalfit resume {layout.Root}' or choose another run_folder");
@@ -51,7 +51,7 @@ public static class FitRunner
         var layout = RunFolderLayout.OpenExisting(runFolder);
         using var runLock = RunLock.Acquire(layout);
         string resolved = File.ReadAllText(layout.ResolvedConfig);
-        var plan = RunPlan.Load(layout.ResolvedConfig);
+        var plan = RunPlan.Load(layout.ResolvedConfig, options.Registry);
         if (plan.Settings.RunFolder != layout.Root)
             throw new InvalidInputException(layout.ResolvedConfig, "key 'run_folder'", $"names {plan.Settings.RunFolder}, but the run is in {layout.Root}; a moved run folder must have run_folder updated");
         string digest = Digest(resolved);

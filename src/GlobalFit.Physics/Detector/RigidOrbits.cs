@@ -12,8 +12,8 @@ namespace GlobalFit.Physics.Detector;
 /// <c>z_n = −√3 eR cos(α − β_n)</c>. The centroid moves on a circle of radius R, the triangle plane is tilted
 /// 60° to the ecliptic and the triangle turns once per period within that plane, against the orbital sense.</para>
 /// <para>Light times are the constant L/c: the point-ahead correction (~1e-4 of L/c) and the Sagnac difference
-/// between the two senses of circulation (~2e-5 s; derived: 4AΩ/c² for the triangle's area A and Ω = 2π/yr) are
-/// ignored, consistently with the rigid model.</para>
+/// between the two senses of circulation (~1e-5 s; derived: 4AΩ_n/c² for the triangle's area A and its rotation rate
+/// Ω_n = Ω/2 about its normal, Ω = 2π/yr) are ignored, consistently with the rigid model.</para>
 /// <para>The default period is the sidereal year, the period of an orbit fixed relative to the stars; the
 /// default radius is 1 au.</para>
 /// </remarks>

@@ -6,8 +6,9 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// (A, cos ι, ψ, φ0).</summary>
 /// <remarks>
 /// <para>Jaranowski, Królak &amp; Schutz 1998 (PRD 58, 063001, arXiv:gr-qc/9804014) for the idea; the ordering, signs
-/// and inversion are derived here for this project's waveform convention (derived: expand h+ cos 2ψ − h× sin 2ψ …
-/// in cos φ(t), sin φ(t) and collect; papers order and sign them differently):
+/// and inversion are derived here for this project's waveform convention (derived: write the wave of
+/// <see cref="GalacticBinaryParameters"/> as a combination of e+ cos φ(t), e× cos φ(t), e+ sin φ(t), e× sin φ(t) and
+/// collect the coefficients; papers order and sign them differently):
 /// <c>a_1 = A+ cos2ψ cosφ0 − A× sin2ψ sinφ0</c>, <c>a_2 = A+ sin2ψ cosφ0 + A× cos2ψ sinφ0</c>,
 /// <c>a_3 = −A+ cos2ψ sinφ0 − A× sin2ψ cosφ0</c>, <c>a_4 = −A+ sin2ψ sinφ0 + A× cos2ψ cosφ0</c>, with
 /// <c>A+ = A(1 + cos²ι)</c>, <c>A× = 2A cos ι</c>; complex form <c>P = a_1 − i a_3</c>, <c>Q = a_2 − i a_4</c>.</para>

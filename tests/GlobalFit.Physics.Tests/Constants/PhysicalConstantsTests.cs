@@ -27,7 +27,8 @@ public class PhysicalConstantsTests
         Assert.Equal(1.988410e30, PhysicalConstants.SolarMassKg, 1.988410e30 * 1e-6);
     }
 
-    // Source: IAU Julian year (365.25 d exactly) and the J2000 sidereal year of 365.256363004 d (from memory).
+    // Source: IAU Julian year (365.25 d exactly) and the J2000 sidereal year of 365.256363004 d (standard
+    // reference tables; not checked against the IERS conventions themselves).
     [Fact]
     public void Year_lengths_match_their_definitions()
     {

@@ -50,7 +50,7 @@ public sealed class SkyAveragedResponseTests
     [Fact]
     public void A_and_E_fall_below_one_and_a_half_times_the_Michelson_power_near_and_above_the_transfer_frequency()
     {
-        // Source: R_A = 1.5 R_X holds only at low f (a claim that it holds at all f, from memory, was wrong).
+        // Source: R_A = 1.5 R_X holds only at low f (a claim that it holds at all f was wrong; this guards against it).
         // An independent static equal-arm frequency-domain computation (StaticSkyAverage.reference.py: plain Python, same sky grid doubled,
         // written for this check and not sharing code with globalfit) gives R_A/R_X = 1.4405365 at x = 2 and
         // 0.3671569 at x = 3. Tolerance 2e-5 relative (quadrature and orbital motion; measured 1.4405354, 0.3671570).

@@ -40,7 +40,7 @@ public class SkyAveragedResponseTests
     // Source: derived (numerical sky average): R_A = 1.5 R_X at low frequency.
     // This holds only while the T channel is deaf (see the next test): at x ≤ 0.3 the departure is below
     // 1e-6, which we assert; at x = 1 it is 5e-4 and at x = 2.7 the ratio is 0.83, so a claim that it holds
-    // "at all f" (from memory) is wrong above about 0.3 f*.
+    // "at all f" is wrong above about 0.3 f*.
     [Theory]
     [InlineData(0.0)]
     [InlineData(0.1)]

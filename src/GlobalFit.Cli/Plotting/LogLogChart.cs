@@ -4,7 +4,7 @@ namespace GlobalFit.Cli.Plotting;
 
 /// <summary>A log-log line chart of curves against frequency, written as PNG.</summary>
 /// <remarks>ScottPlot 5 has no native log axis, so the chart plots log10 of the data and labels the ticks
-/// as decades (shared/notes/libraries.md §5).</remarks>
+/// as decades.</remarks>
 public sealed class LogLogChart
 {
     private readonly Plot _plot;

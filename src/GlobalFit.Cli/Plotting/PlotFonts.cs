@@ -2,7 +2,8 @@ namespace GlobalFit.Cli.Plotting;
 
 /// <summary>Registers the font shipped with globalfit as ScottPlot's default.</summary>
 /// <remarks>ScottPlot's Skia back end finds fonts by scanning the system font folder; on a machine with no
-/// font packages it renders every label as nothing, without an error (shared/notes/libraries.md §5).
+/// font packages it renders every label as nothing, without an error (observed with ScottPlot 5 on a machine without
+/// font packages).
 /// Registering a bundled DejaVu Sans (free licence, beside the file) makes labels appear everywhere.</remarks>
 public static class PlotFonts
 {

@@ -7,7 +7,7 @@ namespace GlobalFit.Engine.Catalogue;
 
 /// <summary>Writes catalogue records as one CSV table (<c>RUN/catalogue.csv</c>; columns in Catalogue/LAYOUT.md).</summary>
 /// <remarks>One file for all classes with a <c>class</c> column, rather than a file per class: one file is what a run
-/// leaves (architecture.md) and what a spreadsheet opens. Parameter columns are the union of the classes' parameters in
+/// leaves and what a spreadsheet opens. Parameter columns are the union of the classes' parameters in
 /// order of first appearance; a cell is empty where a class has no such parameter.</remarks>
 public static class CatalogueCsvWriter
 {

@@ -7,8 +7,7 @@ namespace GlobalFit.Engine.Configuration;
 /// <summary>Reads a TOML configuration file into a <see cref="ConfigTable"/> tree that remembers the line and
 /// column of every key.</summary>
 /// <remarks>Uses Tomlyn's syntax tree rather than its object serializer, because the serializer silently
-/// ignores unknown keys and cannot report where a well-formed but invalid value stands
-/// (shared/notes/libraries.md §7).</remarks>
+/// ignores unknown keys and cannot report where a well-formed but invalid value stands.</remarks>
 public static class ConfigDocument
 {
     /// <summary>Parses the file at <paramref name="path"/>.</summary>

@@ -10,7 +10,7 @@ namespace GlobalFit.Engine.Configuration;
 /// <remarks>
 /// Each settings record is built by one factory that reads its keys through this class and then calls
 /// <see cref="RejectUnknownKeys"/>, so a misspelt key is an error rather than a silently ignored default
-/// (the validate-on-create pattern of shared/notes/style-anchors.md). Not thread-safe: the consumed-key set
+/// (validate on create: a settings value that exists is valid). Not thread-safe: the consumed-key set
 /// is mutated by reads.
 /// </remarks>
 public sealed class ConfigTable

@@ -96,7 +96,8 @@ public sealed record ObservationSettings(double DurationS, double CadenceS, doub
 /// <param name="Foreground">The confusion foreground (published fit and amplitude), or null for none.</param>
 public sealed record NoiseSettings(InstrumentNoiseSettings Instrument, GalacticConfusionSettings? Foreground)
 {
-    /// <summary>Default levels (reference sheet §D.1) with the foreground fitted for one year.</summary>
+    /// <summary>Default levels (<see cref="InstrumentNoiseSettings.Default"/>, the allocation used by Robson, Cornish
+    /// &amp; Liu 2019) with the foreground fitted for one year.</summary>
     public static NoiseSettings Default { get; } = new(InstrumentNoiseSettings.Default, new GalacticConfusionSettings(1.0));
 
     /// <summary>The A/E/T noise model these settings describe.</summary>

@@ -4,7 +4,7 @@ using System.Diagnostics.Metrics;
 namespace GlobalFit.Engine.Telemetry;
 
 /// <summary>The names and instruments of the fit's telemetry: one span per iteration, a child per stage, a grandchild per
-/// worker update, and histograms of iteration time, worker compute and worker wait (architecture.md "Telemetry").</summary>
+/// worker update, and histograms of iteration time, worker compute and worker wait (DEVELOPERS.md, "Data flow of one iteration").</summary>
 /// <remarks>Span and attribute names are part of the <c>telemetry.jsonl</c> format that <c>globalfit trace</c> reads, so
 /// they are constants here and nowhere else. Starting a span returns null when nobody listens (no
 /// <see cref="TelemetrySession"/>), so callers use <c>?.</c>.</remarks>

@@ -11,8 +11,8 @@ namespace GlobalFit.Engine.Telemetry;
 /// <c>RUN/telemetry.jsonl</c> always, and to an OTLP collector (gRPC) when an endpoint is given.</summary>
 /// <remarks>
 /// <para>An unreachable or silent collector must not stall the fit or its exit: the OTLP exporter's timeout is short and
-/// disposing waits at most <see cref="ShutdownTimeoutMilliseconds"/> per provider (libraries.md §3 measured a plain
-/// dispose blocking for the full exporter timeout against a collector that never answers).</para>
+/// disposing waits at most <see cref="ShutdownTimeoutMilliseconds"/> per provider (measured: a plain dispose blocked
+/// for the full exporter timeout against a collector that never answers).</para>
 /// <para>Listeners are process-wide: every span of the <c>GlobalFit.Engine</c> source in the process is exported,
 /// whichever session is open.</para>
 /// </remarks>

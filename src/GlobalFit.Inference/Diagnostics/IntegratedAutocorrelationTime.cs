@@ -3,7 +3,7 @@ namespace GlobalFit.Inference.Diagnostics;
 /// <summary>Integrated autocorrelation time of a single chain with Sokal's automatic window.</summary>
 /// <remarks>
 /// Sokal (1997), "Monte Carlo methods in statistical mechanics: foundations and new algorithms", in
-/// Functional Integration (Cargèse 1996), NATO ASI Series B 361, 131, §3: τ(M) = 1 + 2 Σ_{t=1}^{M} ρ(t),
+/// Functional Integration (proceedings of the 1996 Cargèse school), NATO ASI Series B 361, 131, §3: τ(M) = 1 + 2 Σ_{t=1}^{M} ρ(t),
 /// with M the smallest window satisfying M ≥ c τ(M); c = 5 is adequate when the autocorrelation is roughly
 /// exponential (also emcee's default). The statistical error of the estimate is about
 /// τ √(2(2M + 1)/N). For an AR(1) process with coefficient ρ the exact value is (1 + ρ)/(1 − ρ).

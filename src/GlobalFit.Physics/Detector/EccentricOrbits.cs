@@ -4,12 +4,13 @@ namespace GlobalFit.Physics.Detector;
 
 /// <summary>Keplerian orbits of the three spacecraft, first order in <c>α_L = L/(2R)</c>; the arms flex.</summary>
 /// <remarks>
-/// <para>Construction of Dhurandhar, Nayak, Koshti &amp; Vinet 2005, CQG 22, 481 (arXiv:gr-qc/0410093), as restated
-/// in shared/reference/detector-noise-gb.md §B.2: spacecraft k (σ_k = 2π(k−1)/3) moves on an ellipse with the Sun at
+/// <para>Construction of Dhurandhar, Nayak, Koshti &amp; Vinet 2005, CQG 22, 481 (arXiv:gr-qc/0410093), re-derived
+/// here rather than copied (derived: Kepler ellipse written with <c>(cos ψ + e)</c> so that the Sun sits at a focus;
+/// first-order e and ε from requiring equal arms to first order in α_L): spacecraft k (σ_k = 2π(k−1)/3) moves on an ellipse with the Sun at
 /// a focus, eccentricity <c>e = α_L/√3</c> and inclination <c>ε = α_L</c>. Its eccentric anomaly ψ_k solves
 /// <c>ψ_k + e sin ψ_k = 2πt/T − σ_k + κ</c> (Newton iteration), its in-orbit coordinates are
 /// <c>X = R(cos ψ + e) cos ε</c>, <c>Y = R√(1−e²) sin ψ</c>, <c>Z = R(cos ψ + e) sin ε</c>, and (X, Y) is then rotated
-/// by σ_k about the ecliptic pole. The sheet's phase φ0 is <c>−κ</c> here, so that κ is, to first order in e,
+/// by σ_k about the ecliptic pole. The usual initial phase φ0 is <c>−κ</c> here, so that κ is, to first order in e,
 /// the ecliptic longitude of the constellation centre at t = 0 as in <see cref="RigidOrbits"/>.</para>
 /// <para>With these first-order e and ε the arms flex by about ±6e6 m over a year (Yang 2025, arXiv:2501.00936,
 /// quotes ~1.2e4 km peak to peak for this optimum).</para>

@@ -2,7 +2,7 @@ namespace GlobalFit.Physics.Detector;
 
 /// <summary>The six one-way link measurements as functions of continuous time, with their light times.</summary>
 /// <remarks>The input to <see cref="MichelsonTdi"/>. Link ij is the measurement made on spacecraft i of the beam
-/// sent by spacecraft j (shared/reference/detector-noise-gb.md §0). Implementations that wrap analytic signals can
+/// sent by spacecraft j (our convention; papers differ in the order of the two indices). Implementations that wrap analytic signals can
 /// evaluate any time exactly, so TDI needs no interpolation.</remarks>
 public interface IOneWayLinks
 {

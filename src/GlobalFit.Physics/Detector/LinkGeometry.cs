@@ -3,7 +3,7 @@ using GlobalFit.Physics.Constants;
 namespace GlobalFit.Physics.Detector;
 
 /// <summary>Geometry of the laser links: unit vectors, midpoints and light travel times.</summary>
-/// <remarks>Convention of shared/reference/detector-noise-gb.md §0: link ij is received at spacecraft i and sent
+/// <remarks>Our convention (papers differ in the order of the indices): link ij is received at spacecraft i and sent
 /// by spacecraft j, and <c>n_ij = (x_i − x_j)/|x_i − x_j|</c> points from sender to receiver.</remarks>
 public static class LinkGeometry
 {

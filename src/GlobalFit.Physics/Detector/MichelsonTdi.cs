@@ -2,11 +2,14 @@ namespace GlobalFit.Physics.Detector;
 
 /// <summary>First-generation ("1.5") Michelson TDI combinations X, Y, Z from the six one-way links.</summary>
 /// <remarks>
-/// <para>shared/reference/detector-noise-gb.md §C.2: with round trips <c>r_ij = y_ij + D_ij y_ji</c> measured at
+/// <para>The first-generation Michelson combination (for the theory see Tinto &amp; Dhurandhar 2021, Living Rev.
+/// Relativ. 24, 1; the formula here is written in our index convention, whose overall sign papers choose differently):
+/// with round trips <c>r_ij = y_ij + D_ij y_ji</c> measured at
 /// spacecraft i, <c>X = (1 − D_13 D_31) r_12 − (1 − D_12 D_21) r_13</c> ("arm 12 minus arm 13"), and Y, Z by the
 /// cyclic relabelling 1 → 2 → 3 → 1. D_ij and D_ji are kept distinct and are read from the links at the time each
 /// operator acts, so a nested delay is <c>D_13 D_31 z(t) = z(t − τ_13(t) − τ_31(t − τ_13(t)))</c>.
-/// Laser noise cancels exactly when the arms are static (the delay operators then commute), equal or not.</para>
+/// Laser noise cancels exactly when the arms are static (the delay operators then commute), equal or not (derived:
+/// substitute <c>y_ij = D_ij p_j − p_i</c> and expand).</para>
 /// <para>Sampling the links at arbitrary times is the caller's business; with analytic link signals
 /// (<see cref="PlaneWaveLinks"/>) the delays are exact.</para>
 /// </remarks>

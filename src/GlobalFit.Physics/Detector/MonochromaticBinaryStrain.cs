@@ -2,10 +2,12 @@ namespace GlobalFit.Physics.Detector;
 
 /// <summary>The plane wave of a circular binary with a linear frequency drift.</summary>
 /// <remarks>
-/// shared/reference/detector-noise-gb.md §F.1 (leading quadrupole order): <c>Φ(t) = φ0 + 2π f0 t + π ḟ t²</c>,
+/// Leading quadrupole order (Peters 1964, Phys. Rev. 136, B1224; polarisation convention ours: several papers write
+/// <c>h× = −2A cos ι sin Φ</c>, i.e. cos ι → −cos ι): <c>Φ(t) = φ0 + 2π f0 t + π ḟ t²</c>,
 /// <c>h+ = A(1 + cos²ι) cos Φ</c>, <c>h× = 2A cos ι sin Φ</c>, with t the retarded time at the Sun. The second
 /// derivative of the frequency is left out (it shifts the phase by <c>(π/3) f̈ t³</c>, below a milliradian over four
-/// years for ordinary white-dwarf binaries, check-values.csv "fddot" rows). Immutable and thread-safe.
+/// years for ordinary white-dwarf binaries; derived: <c>f̈ = (11/3) ḟ²/f</c> gives 1.3e-29 Hz/s² for Mc = 0.5 Msun at
+/// 3 mHz, a phase of 3e-5 rad over four years). Immutable and thread-safe.
 /// </remarks>
 public sealed class MonochromaticBinaryStrain : IPlaneWaveStrain
 {

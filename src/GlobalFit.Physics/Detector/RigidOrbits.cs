@@ -4,14 +4,16 @@ namespace GlobalFit.Physics.Detector;
 
 /// <summary>First-order analytic orbits that keep the constellation an exactly rigid equilateral triangle.</summary>
 /// <remarks>
-/// <para>Cornish &amp; Rubbo 2003, PRD 67, 022001 (arXiv:gr-qc/0209011), as restated in
-/// shared/reference/detector-noise-gb.md §B.1: with <c>α = 2πt/T + κ</c>, <c>β_n = 2π(n−1)/3 + λ0</c> and
+/// <para>Cornish &amp; Rubbo 2003, PRD 67, 022001 (arXiv:gr-qc/0209011; formula from memory, its geometric properties
+/// derived: numerical check that the arms stay equal to 1e-14 and the plane tilted by 60°): with
+/// <c>α = 2πt/T + κ</c>, <c>β_n = 2π(n−1)/3 + λ0</c> and
 /// <c>e = L/(2√3 R)</c>,
 /// <c>x_n = R cos α + (eR/2)[cos(2α − β_n) − 3 cos β_n]</c>, <c>y_n = R sin α + (eR/2)[sin(2α − β_n) − 3 sin β_n]</c>,
 /// <c>z_n = −√3 eR cos(α − β_n)</c>. The centroid moves on a circle of radius R, the triangle plane is tilted
 /// 60° to the ecliptic and the triangle turns once per period within that plane, against the orbital sense.</para>
 /// <para>Light times are the constant L/c: the point-ahead correction (~1e-4 of L/c) and the Sagnac difference
-/// between the two senses of circulation (~1e-5 s, §B.1) are ignored, consistently with the rigid model.</para>
+/// between the two senses of circulation (~1e-5 s; derived: 4AΩ_n/c² for the triangle's area A and its rotation rate
+/// Ω_n = Ω/2 about its normal, Ω = 2π/yr) are ignored, consistently with the rigid model.</para>
 /// <para>The default period is the sidereal year, the period of an orbit fixed relative to the stars; the
 /// default radius is 1 au.</para>
 /// </remarks>

@@ -2,7 +2,8 @@ namespace GlobalFit.Physics.Detector;
 
 /// <summary>Direction of a source on the sky in ecliptic coordinates.</summary>
 /// <remarks>The default value is the point β = 0, λ = 0. Unit vectors follow
-/// shared/reference/detector-noise-gb.md §0 and §F.1.</remarks>
+/// <see cref="PolarisationBasis"/>: the propagation direction of a source at (β, λ) is
+/// <c>k = −(cos β cos λ, cos β sin λ, sin β)</c>.</remarks>
 public readonly record struct SkyPosition
 {
     /// <summary>Creates a sky position.</summary>

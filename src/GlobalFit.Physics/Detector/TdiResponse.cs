@@ -6,7 +6,7 @@ namespace GlobalFit.Physics.Detector;
 /// <remarks>Values are fractional-frequency deviations. Immutable once built (the sample arrays belong to it).</remarks>
 public sealed class TdiResponse
 {
-    /// <summary>Groups X, Y, Z (which must share a time axis) and computes A, E, T from them (§C.3).</summary>
+    /// <summary>Groups X, Y, Z (which must share a time axis) and computes A, E, T from them (<see cref="TdiCombination"/>).</summary>
     /// <exception cref="ArgumentException">The channels' time axes differ.</exception>
     public TdiResponse(TimeSeries x, TimeSeries y, TimeSeries z)
     {

@@ -3,7 +3,7 @@ using GlobalFit.Physics.Constants;
 namespace GlobalFit.Physics.Detector;
 
 /// <summary>The transfer frequency <c>f* = c/(2πL)</c> of an arm and the dimensionless frequency <c>x = f/f*</c>.</summary>
-/// <remarks>shared/reference/detector-noise-gb.md §0. Above f* a gravitational wave changes appreciably during one
+/// <remarks>Definition as in Robson, Cornish &amp; Liu 2019 (arXiv:1803.01944). Above f* a gravitational wave changes appreciably during one
 /// light time along an arm, and the long-wavelength response no longer holds. For L = 2.5e9 m, f* = 19.085 mHz
 /// (Robson, Cornish &amp; Liu 2019, arXiv:1803.01944, quote 19.09 mHz).</remarks>
 public static class TransferFrequency

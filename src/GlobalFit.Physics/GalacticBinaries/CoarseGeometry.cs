@@ -6,7 +6,7 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// <summary>Arm directions and midpoints of the constellation at the N coarse times <c>t_n = t0 + nT/N</c>, n = 0 … N (the last one closes the record).</summary>
 /// <remarks>Precomputed once per envelope length because they do not depend on the source: a template call then
 /// needs only dot products with the source's frame. Arm a joins spacecraft (1,2), (2,3), (3,1); its unit vector is
-/// <c>n_12</c>, <c>n_23</c>, <c>n_31</c> (from the second to the first, sheet §0) and its midpoint is shared by the
+/// <c>n_12</c>, <c>n_23</c>, <c>n_31</c> (from the second to the first, as in <see cref="Detector.LinkGeometry"/>) and its midpoint is shared by the
 /// two links along it. Midpoints are stored in light-seconds so that <c>k·x_mid/c</c> is one dot product.</remarks>
 internal sealed class CoarseGeometry
 {

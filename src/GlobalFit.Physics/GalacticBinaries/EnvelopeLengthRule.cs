@@ -12,8 +12,8 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// orbiting triangle reaches the fourth harmonic of the orbital frequency), and a fixed margin for the transfer
 /// function and for the leakage of an envelope that is not periodic over the record. The half-width is doubled and
 /// rounded up to a power of two, then held between <see cref="MinimumLength"/> and <see cref="MaximumLength"/>
-/// (sheet shared/reference/detector-noise-gb.md §F.2 step 2; this rule and its defaults are ours, set by the
-/// accuracy tests against the brute-force response).</para>
+/// (the envelope-length idea is that of Cornish &amp; Littenberg 2007, arXiv:0704.1808; this rule and its defaults are
+/// ours, set by the accuracy tests against the brute-force response).</para>
 /// <para>The rule uses the largest f of the record (<c>f0 + max(ḟ, 0) T</c>) and the ecliptic worst case, so N does not
 /// change with the sky position: a sampler moving over the sky keeps one template length. Beyond
 /// <see cref="MaximumLength"/> the length is capped and accuracy degrades; keep ḟ inside a prior for which the cap is

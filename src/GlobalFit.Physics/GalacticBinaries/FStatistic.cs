@@ -7,7 +7,8 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// <remarks>
 /// <para>Jaranowski, Królak &amp; Schutz 1998 (PRD 58, 063001, arXiv:gr-qc/9804014); for the space detector's TDI
 /// responses at all frequencies, Królak, Tinto &amp; Vallisneri 2004 (PRD 70, 022003, arXiv:gr-qc/0401108). Computed
-/// in the 2×2 complex form of shared/reference/detector-noise-gb.md §G.2: two basis responses u (to e+) and v (to e×)
+/// in a 2×2 complex form derived here (derived: the 4×4 matrix M_ij = (h_i|h_j) of the four basis templates splits
+/// because h̃_3 = −i h̃_1 and h̃_4 = −i h̃_2; it agrees with the 4×4 form to 1e-15): two basis responses u (to e+) and v (to e×)
 /// from one geometry pass of the fast template (<see cref="GalacticBinaryTemplateGenerator.FillBasis"/>), then five
 /// sums over the template's bins inside the band,
 /// <c>F = [V |n_u|² + U |n_v|² − 2 Re(n_u* W* n_v)] / [2 (U V − |W|²)]</c> and <c>(P̂, Q̂) = G⁻¹ (n_u, n_v)</c> with

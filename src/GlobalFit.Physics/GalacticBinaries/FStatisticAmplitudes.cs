@@ -6,12 +6,13 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// (A, cos ι, ψ, φ0).</summary>
 /// <remarks>
 /// <para>Jaranowski, Królak &amp; Schutz 1998 (PRD 58, 063001, arXiv:gr-qc/9804014) for the idea; the ordering, signs
-/// and inversion are those of shared/reference/detector-noise-gb.md §G.1 and §G.3, derived there for this project's
-/// waveform convention (papers order and sign them differently):
+/// and inversion are derived here for this project's waveform convention (derived: write the wave of
+/// <see cref="GalacticBinaryParameters"/> as a combination of e+ cos φ(t), e× cos φ(t), e+ sin φ(t), e× sin φ(t) and
+/// collect the coefficients; papers order and sign them differently):
 /// <c>a_1 = A+ cos2ψ cosφ0 − A× sin2ψ sinφ0</c>, <c>a_2 = A+ sin2ψ cosφ0 + A× cos2ψ sinφ0</c>,
 /// <c>a_3 = −A+ cos2ψ sinφ0 − A× sin2ψ cosφ0</c>, <c>a_4 = −A+ sin2ψ sinφ0 + A× cos2ψ cosφ0</c>, with
 /// <c>A+ = A(1 + cos²ι)</c>, <c>A× = 2A cos ι</c>; complex form <c>P = a_1 − i a_3</c>, <c>Q = a_2 − i a_4</c>.</para>
-/// <para>Inversion (§G.3): <c>R± = |P ± iQ|</c>, <c>A = (√R+ + √R−)²/4</c>, <c>cos ι = (√R+ − √R−)/(√R+ + √R−)</c>,
+/// <para>Inversion (derived: <c>P ± iQ = (A+ ± A×) e^{i(φ0 ± 2ψ)}</c>): <c>R± = |P ± iQ|</c>, <c>A = (√R+ + √R−)²/4</c>, <c>cos ι = (√R+ − √R−)/(√R+ + √R−)</c>,
 /// <c>φ0 = [arg(P + iQ) + arg(P − iQ)]/2</c>, <c>ψ = [arg(P + iQ) − arg(P − iQ)]/4</c>. (ψ, φ0) and (ψ + π/2, φ0 + π)
 /// give the same signal; <see cref="ToExtrinsics"/> returns the copy with ψ in [0, π/2) and φ0 in [0, 2π), which lies
 /// in any prior range ψ ∈ [0, π). Every real 4-vector maps to a physical point.</para>
@@ -51,7 +52,7 @@ public readonly record struct FStatisticAmplitudes(double A1, double A2, double 
             extrinsics.PolarisationRad, extrinsics.InitialPhaseRad);
     }
 
-    /// <summary>The physical parameters these amplitudes belong to (§G.3), with ψ in [0, π/2) and φ0 in [0, 2π).</summary>
+    /// <summary>The physical parameters these amplitudes belong to (the inversion in the remarks), with ψ in [0, π/2) and φ0 in [0, 2π).</summary>
     public GalacticBinaryExtrinsics ToExtrinsics()
     {
         Complex i = Complex.ImaginaryOne;

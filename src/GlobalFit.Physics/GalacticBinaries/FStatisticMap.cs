@@ -4,7 +4,7 @@ namespace GlobalFit.Physics.GalacticBinaries;
 
 /// <summary>The F-statistic evaluated at the centre of every cell of an <see cref="FStatisticGrid"/> over one band.</summary>
 /// <remarks>The input of a birth proposal (<see cref="FStatisticBirthDensity"/>): Crowder &amp; Cornish 2007 and
-/// Littenberg 2011 turn F over frequency and sky into proposal densities (sheet §G, [MEM] for how). Cost: one
+/// Littenberg 2011 turn F over frequency and sky into proposal densities (how they do it: from memory). Cost: one
 /// <see cref="FStatistic.Evaluate"/> per cell. Immutable once computed.</remarks>
 public sealed class FStatisticMap
 {

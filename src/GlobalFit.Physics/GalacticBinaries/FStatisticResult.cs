@@ -3,7 +3,7 @@ using System.Numerics;
 namespace GlobalFit.Physics.GalacticBinaries;
 
 /// <summary>The F-statistic at one intrinsic point and the pieces it is built from.</summary>
-/// <remarks>Notation of shared/reference/detector-noise-gb.md §G.2: <c>U = (u|u)</c>, <c>V = (v|v)</c>,
+/// <remarks>Notation of <see cref="FStatistic"/>: <c>U = (u|u)</c>, <c>V = (v|v)</c>,
 /// <c>W = 4Δf Σ u v*/S</c>, <c>n_u = 4Δf Σ d u*/S</c>, <c>n_v = 4Δf Σ d v*/S</c>, summed over the channels. A value
 /// with <see cref="IsDefined"/> false (template outside the band, or degenerate U V − |W|²) has F = 0.</remarks>
 /// <param name="Value">F, the log-likelihood ratio maximised over the four amplitudes; 2F is χ² with 4 degrees of

@@ -2,7 +2,7 @@ namespace GlobalFit.Physics.GalacticBinaries;
 
 /// <summary>The band-limited log-likelihood ratio of one galactic binary against the data of a band.</summary>
 /// <remarks>
-/// <c>ln Λ = (d|h) − ½ (h|h)</c> (shared/reference/detector-noise-gb.md §H), summed over A, E (and T when the band has
+/// <c>ln Λ = (d|h) − ½ (h|h)</c> (Gaussian-noise likelihood with the inner product of Cutler &amp; Flanagan 1994), summed over A, E (and T when the band has
 /// it) on the template's bins inside the band: h vanishes elsewhere, so this is the full band's value up to the
 /// constant −½(d|d). Sources within N/2 bins of DC are not folded here. Not thread-safe (it renders with the
 /// generator's scratch buffers); allocation-free per call.

@@ -5,7 +5,7 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// <summary>Caller-owned buffers for the two basis responses of the F-statistic: u, the A/E/T response to
 /// <c>H = e+</c>, and v, the response to <c>H = e×</c>, both with φ0 = 0 and unit amplitude.</summary>
 /// <remarks>
-/// shared/reference/detector-noise-gb.md §G.1: any source with the same (f0, ḟ, β, λ) has the response
+/// Derived here (see <see cref="FStatisticAmplitudes"/>; the response is linear in the complex amplitude tensor H): any source with the same (f0, ḟ, β, λ) has the response
 /// <c>h̃ = P ũ + Q ṽ</c> with <c>P = e^{iφ0}(A+ cos 2ψ + i A× sin 2ψ)</c>, <c>Q = e^{iφ0}(A+ sin 2ψ − i A× cos 2ψ)</c>.
 /// Filled by <see cref="GalacticBinaryTemplateGenerator.FillBasis"/>; the arrays have the generator's largest
 /// envelope length and the first <see cref="Count"/> entries are valid. Not thread-safe.

@@ -4,9 +4,10 @@ namespace GlobalFit.Physics.GalacticBinaries;
 
 /// <summary>The parameters of one galactic binary: frequency, drift, amplitude, sky position and orientation.</summary>
 /// <remarks>
-/// <para>Conventions of shared/reference/detector-noise-gb.md §F.1: <c>Φ(t) = φ0 + 2π f0 t + π ḟ t² + (π/3) f̈ t³</c>
+/// <para>Our conventions (leading quadrupole order, Peters 1964; several papers write <c>h× = −2A cos ι sin Φ</c>):
+/// <c>Φ(t) = φ0 + 2π f0 t + π ḟ t² + (π/3) f̈ t³</c>
 /// at the Sun, <c>h+ = A(1 + cos²ι) cos Φ</c>, <c>h× = 2A cos ι sin Φ</c>, with t on the data's time axis (f0 is the
-/// frequency at t = 0). Column names are those of docs/architecture.md and are exposed as constants for files,
+/// frequency at t = 0). Column names are the project's parameter names (units in the name) and are exposed as constants for files,
 /// JSON and configuration.</para>
 /// <para>The struct does not validate: samplers propose values outside the prior and the prior, not the template,
 /// rejects them. <see cref="Validate"/> checks a value read from user input. The default value is all zeros

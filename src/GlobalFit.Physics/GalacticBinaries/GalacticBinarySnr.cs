@@ -3,7 +3,7 @@ using GlobalFit.Physics.Noise;
 namespace GlobalFit.Physics.GalacticBinaries;
 
 /// <summary>Optimal signal-to-noise ratio of a galactic binary in A and E (and optionally T).</summary>
-/// <remarks><c>ρ² = Σ_channels 4Δf Σ_k |h̃_k|²/S(f_k)</c> (shared/reference/detector-noise-gb.md §H) over the template's
+/// <remarks><c>ρ² = Σ_channels 4Δf Σ_k |h̃_k|²/S(f_k)</c> (the inner product of Cutler &amp; Flanagan 1994, discretised) over the template's
 /// bins, with the PSDs of an <see cref="AetNoiseModel"/> at the bin frequencies. Uses the generator's scratch buffers,
 /// so it shares the generator's thread rules.</remarks>
 public static class GalacticBinarySnr

@@ -7,17 +7,20 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// <summary>The fast frequency-domain A/E/T response of galactic binaries for one data record: the template every
 /// galactic-binary likelihood, F-statistic and simulator call goes through.</summary>
 /// <remarks>
-/// <para>Slow/fast decomposition of Cornish &amp; Littenberg 2007 (PRD 76, 083006, arXiv:0704.1808), step by step as
-/// in shared/reference/detector-noise-gb.md §F.2. The signal in each link is a carrier at the bin frequency
+/// <para>Slow/fast decomposition of Cornish &amp; Littenberg 2007 (PRD 76, 083006, arXiv:0704.1808; the idea from the
+/// paper, the steps below re-derived here in our conventions). The signal in each link is a carrier at the bin frequency
 /// <c>f_q = q/T</c>, <c>q = ⌊f0 T⌋</c>, times a slowly varying complex envelope. The envelope is sampled at N coarse
-/// times <c>t_n = t0 + nT/N</c> (N from <see cref="EnvelopeLengthRule"/>) with the rigid-adiabatic link formula of
-/// §C.1 (arm direction, midpoint and frequency taken at t_n):
+/// times <c>t_n = t0 + nT/N</c> (N from <see cref="EnvelopeLengthRule"/>) with the rigid-adiabatic link formula
+/// (Rubbo, Cornish &amp; Poujade 2004, arXiv:gr-qc/0311069, attribution from memory; derived: the two-point formula of
+/// <see cref="PlaneWaveLinks"/> for a monochromatic wave, checked against it to 1e-13 for static spacecraft) with the
+/// arm direction, midpoint and frequency taken at t_n:
 /// <c>g_ij = −i (x/2)(n·H·n) sinc[(x/2)(1 − k·n)] exp(i[Φ(t) − 2πf_q(t − t0) − 2πf k·x_mid/c − x/2])</c>,
 /// <c>x = 2π f(t) τ_a</c> with τ_a the light time of the link's arm; the first-generation Michelson combinations act on
-/// the envelopes with one delay <c>D_a = e^{−ix_a}</c> per arm (§F.2 step 6; equal arms for rigid orbits, flexing ones
-/// for <see cref="EccentricOrbits"/>, which matters for T at low frequency); A, E, T follow (§C.3); an N-point FFT
+/// the envelopes with one delay <c>D_a = e^{−ix_a}</c> per arm (derived: a delay τ multiplies a slowly varying envelope
+/// by e^{−2πifτ}; equal arms for rigid orbits, flexing ones
+/// for <see cref="EccentricOrbits"/>, which matters for T at low frequency); A, E, T follow (<see cref="TdiCombination"/>); an N-point FFT
 /// scaled by <c>T/(2N)</c> gives the full-resolution bins <c>q − N/2 … q + N/2 − 1</c> in the continuous-transform
-/// convention of <see cref="FourierTransform"/> (step 8). Our addition to step 8 is an end correction (the ramp
+/// convention of <see cref="FourierTransform"/> (derived: checked against a direct DFT to 4e-13). Our addition to this placement is an end correction (the ramp
 /// between the envelope's values at t0 and t0 + T is taken out before the FFT and its exact transform added back; see
 /// <c>ToBins</c>): without it the FFT is only first-order accurate for envelopes that are not periodic over the record,
 /// which is every source off a bin centre. Arm directions, midpoints and light times at the coarse times do not depend
@@ -171,7 +174,7 @@ public sealed class GalacticBinaryTemplateGenerator
         double crossAmplitude = 2.0 * source.Amplitude * cosIota;
         var (sin2Psi, cos2Psi) = Math.SinCos(2.0 * source.PolarisationRad);
         var phase = Complex.FromPolarCoordinates(1.0, source.InitialPhaseRad);
-        // §G.1: e^{iφ0} H = P e+ + Q e×.
+        // e^{iφ0} H = P e+ + Q e× (FStatisticAmplitudes).
         Complex p = phase * new Complex(plusAmplitude * cos2Psi, crossAmplitude * sin2Psi);
         Complex qq = phase * new Complex(plusAmplitude * sin2Psi, -crossAmplitude * cos2Psi);
         var a = _a.AsSpan(0, length);
@@ -250,7 +253,7 @@ public sealed class GalacticBinaryTemplateGenerator
         return (int)Math.Floor(frequencyHz * DurationSeconds);
     }
 
-    // §F.2 steps 7–8 with an end correction. The N-point DFT of the samples g(t_0 … t_{N−1}) is a left Riemann sum of
+    // FFT of the envelope and placement in the full-resolution bins, with an end correction. The N-point DFT of the samples g(t_0 … t_{N−1}) is a left Riemann sum of
     // ∫ g e^{−2πikt/T} dt; when the envelope is not periodic over the record (any source off a bin centre, any drift,
     // any record shorter than the orbit) the jump J = g(t0 + T) − g(t0) leaks into every bin as ~J/k and the sum is
     // only first-order accurate, with aliased tails. So the ramp J (t − t0)/T is removed before the FFT (what remains is
@@ -314,7 +317,7 @@ public sealed class GalacticBinaryTemplateGenerator
         for (int n = 0; n <= input.Length; n++)
         {
             var s = Sample(geometry, frame, timing, n);
-            // n·H·n per arm for the source: P p+ + Q p× (§G.1).
+            // n·H·n per arm for the source: P p+ + Q p× (FStatisticAmplitudes).
             Complex h12 = p * s.Plus12 + q * s.Cross12, h23 = p * s.Plus23 + q * s.Cross23, h31 = p * s.Plus31 + q * s.Cross31;
             var (x, y, z) = Michelson(s, h12, h23, h31);
             if (n == input.Length)
@@ -357,7 +360,7 @@ public sealed class GalacticBinaryTemplateGenerator
         }
     }
 
-    // First-generation Michelson combinations on the envelopes (§C.2, §F.2 step 6), one delay D_a = e^{−2πifτ_a} per arm:
+    // First-generation Michelson combinations (MichelsonTdi) on the envelopes, one delay D_a = e^{−2πifτ_a} per arm:
     // X = (1 − D31²)(g12 + D12 g21) − (1 − D12²)(g13 + D31 g31), Y and Z by 1 → 2 → 3 → 1. With equal arms this is
     // (1 − D²)[g12 + D g21 − g13 − D g31]. The link values are the kernels times the arm's n·H·n.
     private static (Complex X, Complex Y, Complex Z) Michelson(in LinkSample s, Complex h12, Complex h23, Complex h31)
@@ -437,7 +440,7 @@ public sealed class GalacticBinaryTemplateGenerator
         return (new Complex(cos, -sin), new Complex(2.0 * sin * sin, 2.0 * sin * cos));
     }
 
-    // Kernels of the two links along one arm (forward: received at the arm's first spacecraft), §C.1 midpoint/sinc form
+    // Kernels of the two links along one arm (forward: received at the arm's first spacecraft), midpoint/sinc form of the link response
     // without the pattern: −i (x/2) sinc[(x/2)(1 ∓ k·n)] exp(i[phase − 2π f k·x_mid/c − x/2]).
     private static void Arm(CoarseGeometry geometry, in SourceFrame frame, int index, double phase, double frequencyHz,
         double halfX, out Complex forward, out Complex reverse, out double plus, out double cross)
@@ -455,7 +458,7 @@ public sealed class GalacticBinaryTemplateGenerator
         reverse = common * Sinc(halfX * (1.0 + kn));
     }
 
-    /// <summary>The triad u, v, k of §F.1 (ψ = 0), built without range checks for the hot path.</summary>
+    /// <summary>The triad u, v, k of <see cref="PolarisationBasis"/> (ψ = 0), built without range checks for the hot path.</summary>
     private readonly struct SourceFrame
     {
         public SourceFrame(double latitudeRad, double longitudeRad)

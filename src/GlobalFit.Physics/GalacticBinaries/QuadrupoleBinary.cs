@@ -5,10 +5,11 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// <summary>Leading-order (quadrupole, circular orbit) relations between a binary's masses, distance, frequency,
 /// frequency drift and amplitude.</summary>
 /// <remarks>
-/// shared/reference/detector-noise-gb.md §F.1: chirp mass <c>Mc = (m1 m2)^(3/5)/(m1 + m2)^(1/5)</c>;
-/// amplitude <c>A = 2 (G Mc)^(5/3) (π f)^(2/3)/(c⁴ D)</c>; Peters 1964 (Phys. Rev. 136, B1224) drift
-/// <c>ḟ = (96/5) π^(8/3) (G Mc/c³)^(5/3) f^(11/3)</c>; its derivative <c>f̈ = (11/3) ḟ²/f</c>; time to coalescence
-/// <c>τ = (3/8) f/ḟ</c>. Masses enter as <c>G M/c³ = T_sun (M/M_sun)</c> (IAU nominal GM_sun), which carries ten
+/// Chirp mass <c>Mc = (m1 m2)^(3/5)/(m1 + m2)^(1/5)</c> and amplitude <c>A = 2 (G Mc)^(5/3) (π f)^(2/3)/(c⁴ D)</c>
+/// (standard quadrupole results; equation numbers not given, from memory); Peters 1964 (Phys. Rev. 136, B1224) drift
+/// <c>ḟ = (96/5) π^(8/3) (G Mc/c³)^(5/3) f^(11/3)</c> (as in Cutler &amp; Flanagan 1994, arXiv:gr-qc/9402014); its
+/// derivative <c>f̈ = (11/3) ḟ²/f</c> and time to coalescence <c>τ = (3/8) f/ḟ</c> (derived: differentiate and
+/// integrate the drift). Masses enter as <c>G M/c³ = T_sun (M/M_sun)</c> (IAU nominal GM_sun), which carries ten
 /// digits where the mass in kg carries five. Mass-transferring binaries can have ḟ &lt; 0; these relations do not
 /// describe them. All members are pure.
 /// </remarks>

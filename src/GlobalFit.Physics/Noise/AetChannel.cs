@@ -1,6 +1,6 @@
 namespace GlobalFit.Physics.Noise;
 
-/// <summary>The noise-orthogonal TDI channels (shared/reference/detector-noise-gb.md §C.3).</summary>
+/// <summary>The noise-orthogonal TDI channels (Prince et al. 2002, arXiv:gr-qc/0209039; see <see cref="Series.TdiCombination"/>).</summary>
 public enum AetChannel
 {
     /// <summary>Channel A = (Z − X)/√2.</summary>

@@ -5,8 +5,9 @@ namespace GlobalFit.Physics.Noise;
 /// confusion foreground mapped into each channel. All PSDs are one-sided, in fractional-frequency units.
 /// </summary>
 /// <remarks>
-/// <para>Instrument part: <see cref="InstrumentNoiseModel"/>. Foreground part (shared/reference/detector-noise-gb.md
-/// §D.3, taking Robson et al.'s S_c as an additive term of their two-channel S_n):
+/// <para>Instrument part: <see cref="InstrumentNoiseModel"/>. Foreground part (derived: taking the S_c of Robson,
+/// Cornish &amp; Liu 2019 as an additive term of their two-channel S_n and converting with the channel's sky-averaged
+/// response; other papers convert with other factors):
 /// <c>S_ch^conf = S_c · 32x² sin²x · R_ch(x)</c>, times the TDI-generation factor, because the foreground is a
 /// signal and passes through the same TDI combination as any wave.</para>
 /// <para>For A and E, <c>R_ch</c> is <see cref="SkyAveragedResponse.ChannelAE"/> or Robson's approximation

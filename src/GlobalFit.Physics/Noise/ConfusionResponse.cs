@@ -1,7 +1,7 @@
 namespace GlobalFit.Physics.Noise;
 
 /// <summary>Which sky-averaged response maps the foreground's strain PSD into the A and E channels.</summary>
-/// <remarks>shared/reference/detector-noise-gb.md §D.3: <c>S_A^conf = S_c · 32x² sin²x · R_A(x)</c>.</remarks>
+/// <remarks>Derived (see <see cref="AetNoiseModel"/>): <c>S_A^conf = S_c · 32x² sin²x · R_A(x)</c>.</remarks>
 public enum ConfusionResponse
 {
     /// <summary>The exact static equal-arm sky average <see cref="SkyAveragedResponse.ChannelAE"/>.</summary>

@@ -6,8 +6,8 @@ namespace GlobalFit.Physics.Noise;
 /// </summary>
 /// <remarks>
 /// <para>Robson, Cornish &amp; Liu 2019, CQG 36, 105011, arXiv:1803.01944, Eq. 14 and its table (the fit goes
-/// back to Cornish &amp; Robson 2017, arXiv:1703.09858), as restated in shared/reference/detector-noise-gb.md
-/// §E.1, where formula and table are marked as recalled, not read:
+/// back to Cornish &amp; Robson 2017, arXiv:1703.09858); formula, table and equation number from memory, not read
+/// from the paper, so the tests also check limits the fit must obey:
 /// <c>S_c(f) = A f^{−7/3} exp(−f^α + β f sin κf) [1 + tanh(γ (f_k − f))]</c>, <c>A = 9e−45</c>, f in Hz,
 /// multiplied here by <see cref="GalacticConfusionSettings.AmplitudeScale"/>.</para>
 /// <para>Above the knee the tanh factor reaches exactly zero in double precision (e.g. above ≈ 20 mHz for

@@ -8,8 +8,8 @@ namespace GlobalFit.Physics.Noise;
 /// </summary>
 /// <remarks>Only the durations tabulated by Robson, Cornish &amp; Liu 2019 (CQG 36, 105011,
 /// arXiv:1803.01944, table accompanying Eq. 14) are accepted: 0.5, 1, 2 and 4 years. The fit parameters
-/// do not vary smoothly with T_obs, so shared/reference/detector-noise-gb.md §E.1 advises against
-/// interpolating between them.</remarks>
+/// do not vary smoothly with T_obs (only the knee frequency falls monotonically), so we do not interpolate
+/// between them.</remarks>
 public sealed record GalacticConfusionSettings
 {
     /// <summary>The observation times (years) for which the published fit exists.</summary>

@@ -7,12 +7,13 @@ namespace GlobalFit.Physics.Noise;
 /// and the TDI combinations X, the X–Y cross-spectrum, A, E and T built from them.
 /// </summary>
 /// <remarks>
-/// <para>Components (shared/reference/detector-noise-gb.md §D.1; allocation as in Robson, Cornish &amp; Liu
-/// 2019, CQG 36, 105011, arXiv:1803.01944): per test mass
+/// <para>Components (allocation as in Robson, Cornish &amp; Liu 2019, CQG 36, 105011, arXiv:1803.01944; their
+/// typography from memory): per test mass
 /// <c>√S_a = a [1 + (0.4 mHz/f)²]^½ [1 + (f/8 mHz)⁴]^½</c> and per link <c>√S_x = o [1 + (2 mHz/f)⁴]^½</c>,
-/// converted to Doppler units by <c>S_acc = S_a/(2πfc)²</c> and <c>S_oms = S_x (2πf/c)²</c>.</para>
-/// <para>TDI PSDs, first generation (§D.2, derived there by a transfer-matrix computation; also in
-/// Prince et al. 2002, PRD 66, 122002), with <c>x = f/f*</c>:
+/// converted to Doppler units by <c>S_acc = S_a/(2πfc)²</c> and <c>S_oms = S_x (2πf/c)²</c> (derived: velocity is
+/// the integral of acceleration and <c>y = (1/c) dx/dt</c>).</para>
+/// <para>TDI PSDs, first generation (derived: transfer matrix from the six independent optical-metrology and six
+/// test-mass noises to X, Y, Z; also in Prince et al. 2002, PRD 66, 122002, from memory), with <c>x = f/f*</c>:
 /// <c>S_X = 16 sin²x [S_oms + (3 + cos 2x) S_acc]</c>, <c>S_XY = −8 sin²x cos x [S_oms + 4 S_acc]</c>,
 /// <c>S_A = S_E = 8 sin²x [(2 + cos x) S_oms + 4 (1 + cos x + cos²x) S_acc]</c>,
 /// <c>S_T = 32 sin²x sin²(x/2) [S_oms + 4 sin²(x/2) S_acc]</c>; second generation multiplies each by
@@ -37,7 +38,7 @@ public sealed class InstrumentNoiseModel
         _transferFrequencyHz = settings.TransferFrequencyHz;
     }
 
-    /// <summary>The model with the default settings (§D.1, first generation).</summary>
+    /// <summary>The model with the default settings (<see cref="InstrumentNoiseSettings.Default"/>, first generation).</summary>
     public static InstrumentNoiseModel Default { get; } = new(InstrumentNoiseSettings.Default);
 
     /// <summary>The parameters of this model.</summary>

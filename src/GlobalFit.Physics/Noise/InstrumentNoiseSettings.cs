@@ -6,8 +6,8 @@ namespace GlobalFit.Physics.Noise;
 /// The instrument-noise parameters: test-mass acceleration and optical-metrology amplitudes, arm length
 /// and TDI generation. Validated on creation and immutable.
 /// </summary>
-/// <remarks>Defaults are the allocation of shared/reference/detector-noise-gb.md §D.1 (the values used by
-/// Robson, Cornish &amp; Liu 2019, CQG 36, 105011, arXiv:1803.01944). Thread-safe.</remarks>
+/// <remarks>Defaults are the noise allocation used by Robson, Cornish &amp; Liu 2019 (CQG 36, 105011,
+/// arXiv:1803.01944): 3e-15 m s⁻² Hz^-1/2, 15e-12 m Hz^-1/2 and 2.5e9 m arms. Thread-safe.</remarks>
 public sealed record InstrumentNoiseSettings
 {
     /// <summary>Default test-mass acceleration amplitude.</summary>
@@ -46,7 +46,7 @@ public sealed record InstrumentNoiseSettings
         Generation = generation;
     }
 
-    /// <summary>The defaults of §D.1 with first-generation TDI.</summary>
+    /// <summary>The default allocation (see the remarks) with first-generation TDI.</summary>
     public static InstrumentNoiseSettings Default { get; } = new();
 
     /// <summary>Test-mass acceleration amplitude (per test mass, one-sided ASD).</summary>

@@ -12,7 +12,7 @@ namespace GlobalFit.Physics.Noise;
 /// <para>For N samples at cadence Δt (T = NΔt, bins <c>f_k = k/T</c>, k = 0 … ⌊N/2⌋): bin 0 is set to 0
 /// (no DC offset); bins <c>1 ≤ k &lt; N/2</c> get <c>ñ_k = √(T S_k/4) (g₁ + i g₂)</c>; for even N the Nyquist bin
 /// <c>k = N/2</c> is real, <c>ñ = √(T S_k/2) g</c>. Every bin then has <c>E|ñ_k|² = (T/2) S_k</c>, the one-sided
-/// noise statistics of shared/reference/detector-noise-gb.md §H in the continuous-transform convention of
+/// noise statistics (as in Cutler &amp; Flanagan 1994, arXiv:gr-qc/9402014) in the continuous-transform convention of
 /// <see cref="FourierTransform"/>, and <see cref="FourierTransform.Inverse(ReadOnlySpan{Complex}, double, Span{double})"/>
 /// returns the time series. Its expected mean square is <c>Δf (Σ_{0&lt;k&lt;N/2} S_k + S_{N/2}/2)</c>,
 /// the discrete <c>∫ S df</c>.</para>
@@ -83,7 +83,8 @@ public static class NoiseSynthesis
     /// <param name="normalsA">N − 1 standard normals for A.</param>
     /// <param name="normalsE">N − 1 standard normals for E.</param>
     /// <param name="normalsT">N − 1 standard normals for T.</param>
-    /// <remarks>A, E and T noises are independent for equal arms (sheet §D.2: their cross-spectra vanish), so
+    /// <remarks>A, E and T noises are independent for equal arms (derived: their cross-spectra vanish, see
+    /// <see cref="InstrumentNoiseModel"/>), so
     /// independent draws per channel give the right joint statistics.</remarks>
     public static AetTimeSeries SynthesiseAet(AetNoiseModel model, int sampleCount, double dtSeconds, double t0Seconds,
         ReadOnlySpan<double> normalsA, ReadOnlySpan<double> normalsE, ReadOnlySpan<double> normalsT)

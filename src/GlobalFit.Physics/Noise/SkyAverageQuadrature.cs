@@ -16,11 +16,12 @@ internal readonly record struct SkyAverages(double X, double A, double E, double
 /// polarisation, averaged over the sky and the polarisation angle.
 /// </summary>
 /// <remarks>
-/// <para>Link response (shared/reference/detector-noise-gb.md §C.1, midpoint/sinc form; Estabrook &amp;
-/// Wahlquist 1975): with arm positions in units of L and <c>u = k·n_ij</c>,
+/// <para>Link response (midpoint/sinc form of the two-point formula of Estabrook &amp; Wahlquist 1975; derived:
+/// monochromatic wave, referred to the arm's midpoint): with arm positions in units of L and <c>u = k·n_ij</c>,
 /// <c>ỹ_ij = (−ix/2) e^{−ix/2} (n_ij·H·n_ij) sinc[x(1 − u)/2] e^{−ix k·p_mid}</c>. Round trips
-/// <c>r_ij = y_ij + D y_ji</c>, <c>D = e^{−ix}</c>, and <c>X = (1 − D²)(r_12 − r_13)</c> (§C.2) with Y, Z cyclic;
-/// A, E, T as in §C.3. Since <c>|1 − D²|² = 4 sin²x</c>, the normalised response
+/// <c>r_ij = y_ij + D y_ji</c>, <c>D = e^{−ix}</c>, and <c>X = (1 − D²)(r_12 − r_13)</c> (<see cref="Detector.MichelsonTdi"/>
+/// with equal static arms) with Y, Z cyclic; A, E, T as in <see cref="Series.TdiCombination"/>. Since
+/// <c>|1 − D²|² = 4 sin²x</c>, the normalised response
 /// <c>|X|²/(16x² sin²x)</c> equals <c>|r_12 − r_13|²/(4x²)</c>, and dropping the common factor
 /// <c>(−ix/2) e^{−ix/2}</c> of every link leaves a quantity that is finite at x = 0 and at the zeros of sin x.</para>
 /// <para>Averages: polarisation by <c>½(|F₊|² + |F×|²)</c> (equal to the ψ average), sky by a product

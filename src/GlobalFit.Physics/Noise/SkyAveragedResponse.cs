@@ -5,9 +5,10 @@ namespace GlobalFit.Physics.Noise;
 /// <c>R(x) = ⟨|channel|²⟩/(16x² sin²x)</c> for a unit-amplitude wave of one polarisation, <c>x = f/f*</c>.
 /// </summary>
 /// <remarks>
-/// <para>Definition and reference values: shared/reference/detector-noise-gb.md §C.4 (R_X table, from
-/// numerical quadrature) and §D.3. Low-frequency limits: <c>R_X → 3/20</c>, <c>R_A = R_E = (3/2) R_X</c>
-/// at every x, and <c>R_T → 0</c>. Orbital motion does not change sky averages.</para>
+/// <para>Definition as used with the sensitivity of Robson, Cornish &amp; Liu 2019 (their approximate transfer
+/// function is <c>2 R_X</c>). Low-frequency limits (derived: long-wavelength response of a 60° Michelson):
+/// <c>R_X → 3/20</c> (= sin²60° × 1/5), <c>R_A = R_E → (3/2) R_X</c>, and <c>R_T → 0</c>. Orbital motion does not
+/// change sky averages.</para>
 /// <para>Values are computed here by quadrature (<see cref="SkyAverageQuadrature"/>), tabulated once on
 /// <c>0 ≤ x ≤ 20</c> (f ≤ 0.38 Hz for 2.5 Gm arms) at spacing 0.05 and interpolated by four-point cubic
 /// Lagrange interpolation (interpolation error below 1e-7, see the tests); above the table every call
@@ -45,8 +46,9 @@ public static class SkyAveragedResponse
 
     /// <summary>Robson et al.'s approximate two-channel (A+E) transfer function <c>(3/10)/(1 + 0.6x²)</c>,
     /// normalised to the X-channel noise (so it approximates <c>2 R_X</c>).</summary>
-    /// <remarks>Robson, Cornish &amp; Liu 2019 (arXiv:1803.01944), as restated in §D.3. Against the exact
-    /// average it is within 2 % below about 5 mHz, up to 13 % high near f* and poor above 2f* (§C.4 table).</remarks>
+    /// <remarks>Robson, Cornish &amp; Liu 2019 (arXiv:1803.01944; form from memory). Against the exact average it is
+    /// within 2 % below about 5 mHz, up to 13 % high near f* and poor above 2f* (derived: compared with this class's
+    /// quadrature; see the tests).</remarks>
     public static double RobsonTwoChannelApproximation(double x) => 0.3 / (1.0 + 0.6 * x * x);
 
     /// <summary>The A-channel counterpart of <see cref="RobsonTwoChannelApproximation"/>: <c>(9/40)/(1 + 0.6x²)</c>,

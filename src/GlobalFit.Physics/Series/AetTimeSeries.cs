@@ -1,7 +1,7 @@
 namespace GlobalFit.Physics.Series;
 
 /// <summary>The three noise-orthogonal TDI channels A, E, T on one common time axis.</summary>
-/// <remarks>A/E/T as in shared/reference/detector-noise-gb.md §C.3: <c>A = (Z − X)/√2</c>,
+/// <remarks>A/E/T as in <see cref="TdiCombination"/>: <c>A = (Z − X)/√2</c>,
 /// <c>E = (X − 2Y + Z)/√6</c>, <c>T = (X + Y + Z)/√3</c>. Values are fractional-frequency deviations.</remarks>
 public sealed class AetTimeSeries
 {

@@ -10,7 +10,8 @@ namespace GlobalFit.Physics.Series;
 /// approximating <c>h̃(f) = ∫ h(t) e^{-2πift} dt</c>. Inverse: <c>h_n = (1/(NΔt)) Σ_{k=0}^{N-1} h̃_k e^{+2πikn/N}</c>
 /// with the negative-frequency half filled by Hermitian symmetry. With this convention Parseval reads
 /// <c>Δt Σ h_n² = Δf Σ_{k=0}^{N-1} |h̃_k|²</c>, and Gaussian noise of one-sided PSD S has
-/// <c>E|h̃_k|² = (T/2) S(f_k)</c> (shared/reference/detector-noise-gb.md §0 and §H).</para>
+/// <c>E|h̃_k|² = (T/2) S(f_k)</c> (derived: Parseval with a one-sided PSD; simulated white noise confirms it, see
+/// the tests).</para>
 /// <para>Implementation note: even lengths pack the real samples into N/2 complex values and run one complex
 /// DFT of N/2 points (<see cref="ComplexDft"/>: radix-2 for powers of two, Bluestein otherwise); odd lengths
 /// run a complex DFT of N points. MathNet 5.0's general-length transform took ~37 s for the 6.3 M samples of

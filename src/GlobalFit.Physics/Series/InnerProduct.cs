@@ -7,8 +7,8 @@ namespace GlobalFit.Physics.Series;
 /// over equal-length bin windows. Channels with independent noise add.
 /// </summary>
 /// <remarks>
-/// Standard definition (Cutler &amp; Flanagan 1994, PRD 49, 2658; restated in
-/// shared/reference/detector-noise-gb.md §H). Kernels take the inverse PSD <c>1/S_k</c> so a caller that
+/// Standard definition (Cutler &amp; Flanagan 1994, PRD 49, 2658, arXiv:gr-qc/9402014; their notation from memory),
+/// discretised with <c>Δf = 1/T</c>. Kernels take the inverse PSD <c>1/S_k</c> so a caller that
 /// evaluates many inner products against one noise model divides once, not per product. They allocate
 /// nothing and are safe to call concurrently on distinct buffers.
 /// </remarks>

@@ -1,9 +1,10 @@
 namespace GlobalFit.Physics.Series;
 
 /// <summary>The linear map from Michelson X, Y, Z to the noise-orthogonal A, E, T.</summary>
-/// <remarks>Coefficients as in shared/reference/detector-noise-gb.md §C.3 (Prince, Tinto, Larson &amp;
-/// Armstrong 2002, PRD 66, 122002, pattern): with equal arms and identical link noises the A, E and T
-/// noises are uncorrelated.</remarks>
+/// <remarks>The coefficient pattern of Prince, Tinto, Larson &amp; Armstrong 2002 (PRD 66, 122002, arXiv:gr-qc/0209039),
+/// applied to Michelson X, Y, Z as is common practice (the exact coefficients from memory; which of the two is "A"
+/// varies between papers): with equal arms and identical link noises the A, E and T noises are uncorrelated (derived:
+/// numerical transfer-matrix check).</remarks>
 public static class TdiCombination
 {
     private static readonly double InvSqrt2 = 1.0 / Math.Sqrt(2.0);

@@ -15,8 +15,9 @@ public class SensitivityCommandTests
         var lines = File.ReadAllLines(csv);
         Assert.Equal("f_hz,psd_a_per_hz,psd_e_per_hz,psd_t_per_hz,sky_averaged_strain_psd_per_hz,approx_strain_psd_per_hz,foreground_strain_psd_per_hz", lines[0]);
         var at1mHz = lines[1].Split(',').Select(v => double.Parse(v, CultureInfo.InvariantCulture)).ToArray();
-        // Source: shared/reference/check-values.csv rows "S_A = S_E TDI 1.5 equal arms" (8.844449e-43 at 1 mHz) and
-        // "Robson S_n instrument only" (1.634101e-38 at 1 mHz), printed to 7 figures (tag CMP): 1e-6 relative.
+        // Source: derived (the same check values as tests/GlobalFit.Physics.Tests/CheckValues/instrument-noise.csv and
+        // robson-sensitivity.csv): S_A = 8.844449e-43 at 1 mHz for equal-arm first-generation TDI with the allocation of
+        // Robson, Cornish & Liu 2019, and their instrument-only S_n = 1.634101e-38 at 1 mHz, 7 figures: 1e-6 relative.
         Assert.Equal(1e-3, at1mHz[0], 1e-15);
         Assert.Equal(8.844449e-43, at1mHz[1], 8.844449e-43 * 1e-6);
         Assert.Equal(1.634101e-38, at1mHz[5], 1.634101e-38 * 1e-6);
@@ -31,7 +32,8 @@ public class SensitivityCommandTests
         string csv = folder.File("curve.csv");
         Assert.Equal(0, CliRun.Run("sensitivity", "--years", "4", "--out", csv, "--f-min", "1e-3", "--f-max", "2e-3", "--points", "2", "--json").ExitCode);
         var row = File.ReadAllLines(csv)[1].Split(',').Select(v => double.Parse(v, CultureInfo.InvariantCulture)).ToArray();
-        // Source: check-values.csv row "Robson confusion S_c (Eq.14 fit)" at 1 mHz, 4 yr: 6.662414e-38 (MEM formula, CMP value).
+        // Source: derived: Robson, Cornish & Liu 2019 Eq. 14 fit for 4 yr at 1 mHz, 6.662414e-38 (formula from memory;
+        // same value as tests/GlobalFit.Physics.Tests/CheckValues/galactic-confusion.csv).
         Assert.Equal(6.662414e-38, row[6], 6.662414e-38 * 1e-6);
     }
 }

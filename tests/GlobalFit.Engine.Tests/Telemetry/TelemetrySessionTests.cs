@@ -7,7 +7,7 @@ using GlobalFit.Physics.Files;
 namespace GlobalFit.Engine.Tests.Telemetry;
 
 // Listeners are process-wide: a session also exports spans that other tests start on the same source, so every
-// assertion here looks only at this test's own trace (libraries.md §3).
+// assertion here looks only at this test's own trace.
 public class TelemetrySessionTests
 {
     [Fact]

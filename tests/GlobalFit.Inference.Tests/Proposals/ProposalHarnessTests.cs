@@ -64,7 +64,7 @@ public sealed class ProposalHarnessTests
     [Fact]
     public void Prior_draws_alone_sample_a_conjugate_Gaussian_posterior()
     {
-        // Source: conjugate normal model (Gelman et al., BDA3 §2.5): prior N(0, 2²), y = 1 with noise 1
+        // Source: conjugate normal model (Gelman et al. 2013, Bayesian Data Analysis, 3rd ed., §2.5): prior N(0, 2²), y = 1 with noise 1
         // gives posterior N(0.8, 0.8). Bounds as in the class remarks.
         var model = new ConjugateGaussianModel([1.0], priorSigma: 2.0, noiseSigma: 1.0);
         var sampler = new ParallelTemperingSampler<ConjugateGaussianModel>(model, new ParallelTemperingSettings

@@ -5,7 +5,7 @@ using GlobalFit.Inference.Targets;
 namespace GlobalFit.Inference.Tests.Support;
 
 /// <summary>θ_i ~ N(0, τ²) independently, one observation y_i ~ N(θ_i, σ²) per component. Posterior:
-/// N(y_i τ²/(τ² + σ²), τ²σ²/(τ² + σ²)); evidence Π N(y_i; 0, τ² + σ²) (e.g. Gelman et al., BDA3 §2.5).</summary>
+/// N(y_i τ²/(τ² + σ²), τ²σ²/(τ² + σ²)); evidence Π N(y_i; 0, τ² + σ²) (e.g. Gelman et al. 2013, Bayesian Data Analysis, 3rd ed., §2.5).</summary>
 internal sealed class ConjugateGaussianModel : ITargetModel
 {
     private readonly double[] _data;

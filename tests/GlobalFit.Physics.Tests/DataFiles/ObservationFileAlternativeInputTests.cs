@@ -18,8 +18,8 @@ public class ObservationFileAlternativeInputTests
     [Fact]
     public void Michelson_channels_are_converted_to_aet_on_read()
     {
-        // Source: A = (Z − X)/√2, E = (X − 2Y + Z)/√6, T = (X + Y + Z)/√3 (shared/reference/detector-noise-gb.md §C.3,
-        // tagged [DER]), evaluated by hand for round inputs. 1e-15 relative: one or two roundings.
+        // Source: A = (Z − X)/√2, E = (X − 2Y + Z)/√6, T = (X + Y + Z)/√3 (TdiCombination; Prince et al. 2002
+        // pattern), evaluated by hand for round inputs. 1e-15 relative: one or two roundings.
         using var folder = new TempFolder();
         var tree = ObservationSamples.ValidTree(count: 3, channels: "XYZ");
         tree.Tdi()["X"] = new[] { 1.0, 0.0, 2e-21 };

@@ -34,7 +34,7 @@ public class ObservationFileFromOtherWritersTests
     public void Michelson_channels_from_h5py_convert_to_the_hand_computed_aet()
     {
         // X, Y, Z = (1, 2, 4), (0, 1, 0), (3, 3, 3), (−1, 0, 1) in the script. By hand with A = (Z − X)/√2,
-        // E = (X − 2Y + Z)/√6, T = (X + Y + Z)/√3 (detector-noise-gb.md §C.3): A = 3/√2, 0, 0, 2/√2;
+        // E = (X − 2Y + Z)/√6, T = (X + Y + Z)/√3 (TdiCombination): A = 3/√2, 0, 0, 2/√2;
         // E = 1/√6, −2/√6, 0, 0; T = 7/√3, 1/√3, 9/√3, 0. 1e-15 relative allows one or two roundings.
         var data = ObservationFile.Read(ReferenceFile()).Data;
 

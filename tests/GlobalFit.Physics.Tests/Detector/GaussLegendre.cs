@@ -2,7 +2,7 @@ namespace GlobalFit.Physics.Tests.Detector;
 
 /// <summary>Gauss-Legendre nodes and weights on [-1, 1], for sky quadratures in tests.</summary>
 /// <remarks>Newton iteration on P_n from the Chebyshev-like first guess cos(pi (i + 3/4)/(n + 1/2))
-/// (Press et al., Numerical Recipes, 3rd ed., §4.6). Exact for polynomials of degree 2n - 1.</remarks>
+/// (Press et al. 2007, Numerical Recipes, 3rd ed., §4.6). Exact for polynomials of degree 2n - 1.</remarks>
 internal static class GaussLegendre
 {
     public static (double[] Nodes, double[] Weights) Rule(int n)

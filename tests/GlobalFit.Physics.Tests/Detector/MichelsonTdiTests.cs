@@ -5,7 +5,8 @@ namespace GlobalFit.Physics.Tests.Detector;
 
 public sealed class MichelsonTdiTests
 {
-    /// <summary>Links carrying only laser noise, <c>y_ij = D_ij p_j − p_i</c> (sheet §C.1), with static delays that
+    /// <summary>Links carrying only laser noise, <c>y_ij = D_ij p_j − p_i</c> (derived: the received laser phase
+    /// minus the local one, in our index convention), with static delays that
     /// are whole numbers of samples so the noise sequences can be read exactly.</summary>
     private sealed class LaserNoiseLinks(double[][] laserNoise, int[,] delaySamples, double dtSeconds) : IOneWayLinks
     {
@@ -25,7 +26,8 @@ public sealed class MichelsonTdiTests
     [InlineData(3, 4, 5, 6, 7, 8)]
     public void Michelson_combinations_cancel_laser_noise_exactly_with_static_arms(int d12, int d21, int d23, int d32, int d31, int d13)
     {
-        // Source: sheet §C.2 (DER): with static arms the delay operators commute and X, Y, Z cancel laser noise
+        // Source: Tinto & Dhurandhar 2021 (Living Rev. Relativ. 24, 1), first generation; derived: with static arms
+        // the delay operators commute and X, Y, Z cancel laser noise
         // exactly, equal arms or not ("TDI 1.5", D_ij and D_ji distinct). Noise is unit-variance Gaussian (fixed
         // seed); what remains is rounding of sums of eight O(1) terms, so 1e-13 absolute. The round trips
         // themselves keep O(1) noise (negative control: the cancellation is TDI's, not the links').

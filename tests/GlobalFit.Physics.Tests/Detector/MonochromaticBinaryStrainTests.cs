@@ -12,7 +12,8 @@ public sealed class MonochromaticBinaryStrainTests
     [Fact]
     public void Polarisation_amplitudes_follow_the_inclination()
     {
-        // Source: sheet §F.1: h+ = A(1 + cos^2 i) cos Phi, hx = 2 A cos i sin Phi; face-on strain per polarisation 2A.
+        // Source: leading quadrupole order (Peters 1964) in our sign convention (MonochromaticBinaryStrain remarks):
+        // h+ = A(1 + cos^2 i) cos Phi, hx = 2 A cos i sin Phi; face-on strain per polarisation 2A.
         // Phi(0) = 0 gives h+ = A+ and Phi(1/(4 f0)) = pi/2 gives hx = Ax. Rounding-level tolerance.
         var faceOn = Source(iota: 0.0, phi0: 0.0);
         Assert.Equal(2e-22, faceOn.At(0.0).Plus, 1e-36);
@@ -27,7 +28,7 @@ public sealed class MonochromaticBinaryStrainTests
     [Fact]
     public void Phase_grows_at_the_instantaneous_frequency()
     {
-        // Source: sheet §F.1: Phi = phi0 + 2 pi f0 t + pi fdot t^2, so dPhi/dt = 2 pi (f0 + fdot t); a central
+        // Source: definition of the phase, Phi = phi0 + 2 pi f0 t + pi fdot t^2, so dPhi/dt = 2 pi (f0 + fdot t); a central
         // difference over 1 s is exact for a quadratic up to rounding of Phi ~ 1e5 rad (1e-11 relative).
         var source = Source(fdot: 1e-13);
         double t = 1.0e7;

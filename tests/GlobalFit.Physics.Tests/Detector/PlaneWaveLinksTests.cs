@@ -31,7 +31,7 @@ public sealed class PlaneWaveLinksTests
     [Fact]
     public void A_wave_running_along_the_beam_produces_no_signal()
     {
-        // Source: sheet §C.1 two-point formula: for k = n the pattern n.eps.n and the strain difference both vanish
+        // Source: two-point formula of Estabrook & Wahlquist 1975 (GRG 6, 439): for k = n the pattern n.eps.n and the strain difference both vanish
         // (the photon surfs the wave), so the limit is 0; beta = 0, lambda = pi gives k = (1, ~1e-16, 0) = n_12 exactly
         // in floating point, which would otherwise give 0/0.
         var links = new PlaneWaveLinks(Wave, new PolarisationBasis(new SkyPosition(0.0, Math.PI), 0.3), Orbits);
@@ -42,7 +42,7 @@ public sealed class PlaneWaveLinksTests
     [Fact]
     public void Link_across_a_wave_front_measures_half_the_pattern_times_the_strain_change_over_the_light_time()
     {
-        // Source: sheet §C.1 two-point formula with k.n = 0 and both spacecraft on the same wave front (k.x = 0):
+        // Source: two-point formula of Estabrook & Wahlquist 1975 with k.n = 0 and both spacecraft on the same wave front (k.x = 0):
         // y_ij = (n.eps.n / 2)[h(t - L/c) - h(t)]. Wave along z (beta = -pi/2), arm along x, static spacecraft;
         // 1e-14 absolute on signals of order 1 (rounding).
         var basis = new PolarisationBasis(new SkyPosition(-0.5 * Math.PI, 0.2), 0.3);

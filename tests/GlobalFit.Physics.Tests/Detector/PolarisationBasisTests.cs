@@ -19,7 +19,8 @@ public sealed class PolarisationBasisTests
     [MemberData(nameof(Directions))]
     public void Triad_is_orthonormal_and_right_handed_with_k_pointing_away_from_the_source(double beta, double lambda, double psi)
     {
-        // Source: sheet §F.1 (DER): (u, v, k) right-handed, k = -(cos b cos l, cos b sin l, sin b). Rounding-level tolerance.
+        // Source: our convention (PolarisationBasis remarks; derived: the triad is orthonormal and right-handed):
+        // k = -(cos b cos l, cos b sin l, sin b). Rounding-level tolerance.
         var sky = new SkyPosition(beta, lambda);
         var basis = new PolarisationBasis(sky, psi);
         Assert.Equal(1.0, basis.U.Length, 1e-15);
@@ -34,7 +35,7 @@ public sealed class PolarisationBasisTests
     [MemberData(nameof(Directions))]
     public void Polarisation_tensors_are_transverse_traceless_and_normalised(double beta, double lambda, double psi)
     {
-        // Source: TT-gauge polarisation tensors (sheet §F.1): eps.k = 0, tr eps = 0, eps+ : eps+ = epsx : epsx = 2,
+        // Source: TT-gauge polarisation tensors (derived from e+ = uu - vv, ex = uv + vu): eps.k = 0, tr eps = 0, eps+ : eps+ = epsx : epsx = 2,
         // eps+ : epsx = 0. Components are read through the contractions with the coordinate axes. 1e-14 absolute.
         var basis = new PolarisationBasis(new SkyPosition(beta, lambda), psi);
         double plusNorm = 0, crossNorm = 0, overlap = 0, plusTrace = 0, crossTrace = 0;
@@ -63,7 +64,7 @@ public sealed class PolarisationBasisTests
     [Fact]
     public void Rotating_psi_by_an_eighth_turn_turns_plus_into_cross_and_a_quarter_turn_flips_the_sign()
     {
-        // Source: sheet §F.1: eps+(psi) = cos 2psi e+ + sin 2psi ex, epsx(psi) = -sin 2psi e+ + cos 2psi ex, so
+        // Source: our convention (PolarisationBasis remarks): eps+(psi) = cos 2psi e+ + sin 2psi ex, epsx(psi) = -sin 2psi e+ + cos 2psi ex, so
         // eps+(psi + pi/4) = epsx(psi) and eps+(psi + pi/2) = -eps+(psi). 1e-15 absolute on unit-vector contractions.
         var sky = new SkyPosition(0.4, 1.9);
         var a = new Vector3D(0.3, -0.8, 0.52).Normalized();
@@ -82,7 +83,7 @@ public sealed class PolarisationBasisTests
     [Fact]
     public void Source_on_the_x_axis_has_the_documented_frame()
     {
-        // Source: sheet §F.1 at beta = lambda = 0: u = (0, 0, -1), v = (0, -1, 0), k = (-1, 0, 0); so a link along z
+        // Source: our convention (PolarisationBasis remarks) at beta = lambda = 0: u = (0, 0, -1), v = (0, -1, 0), k = (-1, 0, 0); so a link along z
         // sees e+ = 1 and one along y sees e+ = -1.
         var basis = new PolarisationBasis(new SkyPosition(0, 0), 0);
         Assert.Equal(new Vector3D(0, 0, -1), basis.U);

@@ -8,8 +8,9 @@ public sealed class RigidOrbitsTests
 {
     private static readonly RigidOrbits CheckOrbits = new(armLengthM: 2.5e9, orbitRadiusM: PhysicalConstants.AstronomicalUnitM);
 
-    // Source: check-values.csv rows "Cornish-Rubbo orbit SC* x/y/z" (CMP from sheet §B.1; Cornish & Rubbo 2003,
-    // arXiv:gr-qc/0209011); L = 2.5e9 m, R = 1 au, kappa = lambda0 = 0. The CSV prints 11 figures, so 1e-9 relative.
+    // Source: derived: the orbit formula of Cornish & Rubbo 2003 (arXiv:gr-qc/0209011; formula from memory, its
+    // rigid-triangle properties tested below) evaluated independently at t = 0 for L = 2.5e9 m, R = 1 au,
+    // kappa = lambda0 = 0, printed to 11 figures, so 1e-9 relative.
     [Theory]
     [InlineData(1, 1.4887618286e11, 0.0, -1.25e9)]
     [InlineData(2, 1.4995871462e11, -1.25e9, 6.25e8)]
@@ -25,7 +26,7 @@ public sealed class RigidOrbitsTests
     [Fact]
     public void Position_of_spacecraft_1_a_quarter_period_later_matches_the_check_values()
     {
-        // Source: check-values.csv rows "Cornish-Rubbo orbit SC1 x/y, t=T_orb/4" (CMP, sheet §B.1); 1e-9 relative
+        // Source: derived: the same formula evaluated at t = T_orb/4 (x = -L/sqrt 3 exactly); 1e-9 relative
         // per component (x = -L/sqrt 3 exactly; z is ~0, checked to 1e-9 of an au).
         var p = CheckOrbits.Position(1, 0.25 * CheckOrbits.PeriodSeconds);
         Assert.Equal(-1.4433756730e9, p.X, 1e-9 * 1.4433756730e9);
@@ -36,15 +37,16 @@ public sealed class RigidOrbitsTests
     [Fact]
     public void Eccentricity_matches_the_check_value()
     {
-        // Source: check-values.csv row "orbit eccentricity e = L/(2 sqrt(3) R)" = 4.824185218e-3 (CMP; 10 figures).
+        // Source: Cornish & Rubbo 2003 (arXiv:gr-qc/0209011), e = L/(2 sqrt(3) R); derived: 4.824185218e-3 for
+        // L = 2.5e9 m, R = 1 au (10 figures).
         Assert.Equal(4.824185218e-3, CheckOrbits.Eccentricity, 1e-9 * 4.824185218e-3);
     }
 
     [Fact]
     public void Arm_length_of_rigid_orbits_stays_constant_over_a_year()
     {
-        // Source: Cornish & Rubbo 2003 (arXiv:gr-qc/0209011), rigid equilateral triangle; check-values.csv
-        // "Cornish-Rubbo arm length" (DER: constant to 1e-14). Asserted to 1e-12 relative at 500 times and
+        // Source: Cornish & Rubbo 2003 (arXiv:gr-qc/0209011), rigid equilateral triangle (derived: an independent
+        // numerical check finds the arms constant to 1e-14). Asserted to 1e-12 relative at 500 times and
         // several orbit phases; coordinates of 1.5e11 m carry ~3e-5 m of rounding, 1e-14 of an arm.
         var orbits = new RigidOrbits(initialOrbitalPhaseRad: 0.3, initialOrientationRad: 0.7);
         double worst = 0;
@@ -60,8 +62,8 @@ public sealed class RigidOrbitsTests
     [Fact]
     public void Constellation_plane_is_tilted_sixty_degrees_to_the_ecliptic_and_its_centroid_stays_one_au_from_the_Sun()
     {
-        // Source: Cornish & Rubbo 2003 (arXiv:gr-qc/0209011); sheet §B.1 and check-values.csv
-        // "Cornish-Rubbo constellation tilt" = 60 deg (DER). Tolerances: 1e-9 rad and 1e-9 relative, far above rounding.
+        // Source: Cornish & Rubbo 2003 (arXiv:gr-qc/0209011): constellation plane tilted by 60 deg to the ecliptic
+        // (derived: numerical check of the formula). Tolerances: 1e-9 rad and 1e-9 relative, far above rounding.
         var orbits = new RigidOrbits(initialOrbitalPhaseRad: 1.1, initialOrientationRad: -0.4);
         for (int n = 0; n < 24; n++)
         {
@@ -78,7 +80,8 @@ public sealed class RigidOrbitsTests
     [Fact]
     public void Triangle_turns_once_per_year_in_its_plane_against_the_orbital_sense()
     {
-        // Source: Cornish & Rubbo 2003 (arXiv:gr-qc/0209011) "cartwheel" motion; sheet §B.1 (DER): -30 deg per month.
+        // Source: Cornish & Rubbo 2003 (arXiv:gr-qc/0209011) "cartwheel" motion; derived from the formula: -30 deg
+        // per month.
         // Seen from the frame that co-rotates with the guiding centre (radial, along-track, ecliptic north), the
         // offset of SC1 from the centroid turns about the plane's north-pointing normal by -360 deg/12 each twelfth
         // of a period. Tolerance 1e-7 deg, rounding level for these angles.
@@ -96,7 +99,7 @@ public sealed class RigidOrbitsTests
     [Fact]
     public void Light_time_is_the_arm_length_over_c()
     {
-        // Source: check-values.csv row "light travel time L/c" = 8.339102380 s (CMP); 10 figures, so 1e-9 relative.
+        // Source: derived: L/c = 2.5e9 m / 299792458 m/s = 8.339102380 s (SI exact c); 10 figures, so 1e-9 relative.
         foreach (var (i, j) in new[] { (1, 2), (2, 1), (2, 3), (3, 2), (3, 1), (1, 3) })
             Assert.Equal(8.339102380, CheckOrbits.LightTimeSeconds(i, j, 1.2345e6), 1e-9 * 8.339102380);
     }

@@ -17,8 +17,9 @@ public sealed class SkyAveragedResponseTests
     private const double ArmM = 2.5e9;
     private static readonly double TransferFrequencyHz = TransferFrequency.Hz(ArmM);
 
-    // Source: sheet §C.4 table of exact static equal-arm R_X = <|X|^2>/(16 x^2 sin^2 x) and check-values.csv rows
-    // "R_X exact static equal-arm" (CMP, converged to ~1e-5, printed to 5 decimals). Tolerance 6e-6 absolute: table
+    // Source: derived: an independent numerical sky/polarisation quadrature of the static equal-arm
+    // R_X = <|X|^2>/(16 x^2 sin^2 x) (converged to ~1e-5, printed to 5 decimals; the same values as
+    // CheckValues/sky-averaged-response.csv). Tolerance 6e-6 absolute: table
     // rounding (5e-6) plus quadrature and orbital motion (~1e-6). Measured: 0.14949772, 0.13785663, 0.10623536,
     // 0.03347550, 0.00812478.
     [Theory]
@@ -37,7 +38,8 @@ public sealed class SkyAveragedResponseTests
     [Fact]
     public void A_and_E_carry_one_and_a_half_times_the_Michelson_power_at_low_frequency()
     {
-        // Source: sheet §C.4 and check-values.csv row "R_A/R_X" = 1.5 (DER, numerical sky average); at x = 0.1 the
+        // Source: derived: R_A/R_X -> 1.5 at low frequency (independent numerical sky average; equivalently the
+        // averaged X-Z cross-response tends to -R_X/2); at x = 0.1 the
         // ratio is 1.5 to 1e-8 in an independent static computation, so 1e-5 covers quadrature and motion
         // (measured 1.50000001 and 1.50000000).
         var powers = AveragedPowers(0.1);
@@ -48,8 +50,8 @@ public sealed class SkyAveragedResponseTests
     [Fact]
     public void A_and_E_fall_below_one_and_a_half_times_the_Michelson_power_near_and_above_the_transfer_frequency()
     {
-        // Source: the sheet (§C.4, check-values.csv "R_A/R_X, any f") states R_A = 1.5 R_X at all f; that is only true
-        // at low f. An independent static equal-arm frequency-domain computation (plain Python, same sky grid doubled,
+        // Source: R_A = 1.5 R_X holds only at low f (a claim that it holds at all f was wrong; this guards against it).
+        // An independent static equal-arm frequency-domain computation (StaticSkyAverage.reference.py: plain Python, same sky grid doubled,
         // written for this check and not sharing code with globalfit) gives R_A/R_X = 1.4405365 at x = 2 and
         // 0.3671569 at x = 3. Tolerance 2e-5 relative (quadrature and orbital motion; measured 1.4405354, 0.3671570).
         var atTwo = AveragedPowers(2.0);
@@ -62,8 +64,9 @@ public sealed class SkyAveragedResponseTests
     [Fact]
     public void T_is_suppressed_relative_to_A_at_low_frequency_faster_than_the_noise_is()
     {
-        // Source: sheet §D.2 low-f limits: T noise is x^2/3 of A noise in power (S_T -> 8 x^4 S_oms, S_A -> 24 x^2 S_oms),
-        // and T is "insensitive to gravitational waves at low frequency" (Prince et al. 2002, arXiv:gr-qc/0209039, [MEM]).
+        // Source: derived low-f limits of the equal-arm TDI noise (InstrumentNoiseModel): T noise is x^2/3 of A noise
+        // in power (S_T -> 8 x^4 S_oms, S_A -> 24 x^2 S_oms), and T is "insensitive to gravitational waves at low
+        // frequency" (Prince et al. 2002, arXiv:gr-qc/0209039, wording from memory).
         // The signal is suppressed further: the independent static computation quoted above gives
         // <|T|^2>/<|A|^2> = 5.52e-4 x^6 at x <= 0.4 (T amplitude falls as x^3 relative to A). Checked here: at x = 0.2
         // the ratio is below 1e-3 of the noise ratio x^2/3, and from x = 0.2 to 0.4 it grows by 2^6 within 5 %.

@@ -21,9 +21,10 @@ public sealed class SlowReferenceResponseTests(ITestOutputHelper output)
     [InlineData(5e-5)]
     public void Michelson_X_approaches_the_long_wavelength_form_at_low_frequency(double frequencyHz)
     {
-        // Source: sheet §C.4 (DER): X(t) ~ -2 (L/c)^2 d^2/dt^2 [(n12 n12 - n13 n13) : h(t - 2L/c, x_1)], which for a
+        // Source: long-wavelength limit (Cutler 1998, arXiv:gr-qc/9703068; derived: expand the two-point formula to
+        // second order in L/c): X(t) ~ -2 (L/c)^2 d^2/dt^2 [(n12 n12 - n13 n13) : h(t - 2L/c, x_1)], which for a
         // monochromatic wave is 2 x^2 [(n12 n12 - n13 n13) : h]; the full response differs at relative order x
-        // (sheet: amplitude ratio - 1 = 1.7e-3 at 0.1 mHz). Tolerance 3x on the largest sample difference relative to
+        // (derived: amplitude ratio - 1 = 1.7e-3 at 0.1 mHz for one geometry). Tolerance 3x on the largest sample difference relative to
         // the largest |X_LW| (x = 5.2e-3 at 0.1 mHz). Measured: 0.12x at 0.1 mHz, 0.41x at 0.05 mHz. The second grows
         // because the moving arms add a relative term ~ (Omega 2L/c)/x ~ 3e-6/x that the static form leaves out: the
         // arms turn by Omega 2L/c = 3e-6 rad during a round trip (Omega = 2 pi/yr), which (1 - D^2) does not cancel.
@@ -53,10 +54,10 @@ public sealed class SlowReferenceResponseTests(ITestOutputHelper output)
     [Fact]
     public void Wave_along_the_constellation_normal_sees_a_sixty_degree_Michelson()
     {
-        // Source: Cutler 1998, PRD 57, 7089 (arXiv:gr-qc/9703068) [MEM for the exact form]: the long-wavelength
-        // response of a 60-degree Michelson carries sin 60 deg = sqrt(3)/2 relative to a 90-degree one; sheet §C.4:
-        // |X| = 4 x^2 |h_M|. A circularly polarised unit wave (h+ = cos, hx = sin) along the plane normal gives
-        // |h_M| = sqrt(3)/2 for every psi, so |X| = 2 sqrt(3) x^2. Tolerance 3x relative (order-x corrections, §C.4).
+        // Source: Cutler 1998, PRD 57, 7089 (arXiv:gr-qc/9703068; the exact form from memory): the long-wavelength
+        // response of a 60-degree Michelson carries sin 60 deg = sqrt(3)/2 relative to a 90-degree one; derived
+        // (previous test's limit): |X| = 4 x^2 |h_M|. A circularly polarised unit wave (h+ = cos, hx = sin) along the plane normal gives
+        // |h_M| = sqrt(3)/2 for every psi, so |X| = 2 sqrt(3) x^2. Tolerance 3x relative (order-x corrections, as above).
         // Measured -4.8e-4 and -2.3e-4 (x = 5.2e-3).
         double frequencyHz = 1e-4, x = frequencyHz / TransferFrequencyHz, t0 = 5.0e6;
         var (p1, p2, p3) = (Rigid.Position(1, t0), Rigid.Position(2, t0), Rigid.Position(3, t0));
@@ -78,7 +79,8 @@ public sealed class SlowReferenceResponseTests(ITestOutputHelper output)
     [InlineData(5e-2)]
     public void Each_link_matches_the_static_midpoint_sinc_form(double frequencyHz)
     {
-        // Source: sheet §C.1 monochromatic "midpoint/sinc" form (DER, checked to 1e-13 for static spacecraft):
+        // Source: monochromatic "midpoint/sinc" form of the Estabrook & Wahlquist 1975 two-point formula (derived:
+        // referred to the arm midpoint, checked to 1e-13 for static spacecraft):
         // y_ij = Re{-i a (n.H.n) sinc[a(1 - k.n)] exp(i[Phi(t) - 2 pi f k.x_mid/c - a])}, a = pi f L/c,
         // H = A+ eps+ - i Ax epsx. The two differ only by the spacecraft motion during one light time (v/c ~ 1e-4 of
         // the link, phase 2 pi f v L/c^2 <= 1.3e-4 rad at 50 mHz), so tolerance 5e-4 of the peak link amplitude
@@ -113,8 +115,9 @@ public sealed class SlowReferenceResponseTests(ITestOutputHelper output)
     [Fact]
     public void Flexing_orbits_give_the_same_low_frequency_response_to_within_the_flexing()
     {
-        // Source: sheet §B.2: eccentric orbits flex by ~0.24 % of L each way and keep the same 60-degree geometry to
-        // first order in e; at low frequency X scales as L^2 (§C.4), so X from eccentric orbits must agree with the
+        // Source: Dhurandhar et al. 2005 (arXiv:gr-qc/0410093): eccentric orbits flex by ~0.24 % of L each way
+        // (EccentricOrbitsTests) and keep the same 60-degree geometry to first order in e; at low frequency X scales
+        // as L^2 (the long-wavelength limit above), so X from eccentric orbits must agree with the
         // long-wavelength amplitude 2 sqrt(3) x^2 of a normal-incidence circular wave to 1 % (flexing 0.5 % + 3x).
         // Measured -6.2e-4.
         var eccentric = new EccentricOrbits(armLengthM: ArmM, initialOrbitalPhaseRad: 0.3);
@@ -132,7 +135,8 @@ public sealed class SlowReferenceResponseTests(ITestOutputHelper output)
     [Fact]
     public void Result_carries_the_requested_time_axis_and_consistent_A_E_T()
     {
-        // Source: sheet §C.3 A/E/T coefficients; identity check at rounding level (1e-14 of the largest |X|).
+        // Source: A/E/T coefficients of TdiCombination (Prince et al. 2002 pattern); identity check at rounding
+        // level (1e-14 of the largest |X|).
         var response = SlowReferenceResponse.Compute(Binary(3e-3), Rigid, 100.0, 5.0, 50);
         double scale = response.X.Samples.Max(Math.Abs);
         Assert.True(scale > 0);

@@ -1,6 +1,8 @@
 # Independent check for SkyAveragedResponseTests (globalfit, Detector tests).
 # Static, equal-arm, frequency-domain TDI response written from the formulas of
-# shared/reference/detector-noise-gb.md §C.1-C.3 and §F.1, sharing no code with globalfit.
+# Estabrook & Wahlquist 1975 (two-point link formula, monochromatic midpoint/sinc form), first-generation
+# Michelson X, Y, Z, A/E/T of Prince et al. 2002 and the polarisation convention of PolarisationBasis.cs,
+# sharing no code with globalfit.
 # Units: c = 1, L = 1, so x = 2 pi f. Run: python3 StaticSkyAverage.reference.py (about a minute).
 # Output used in the tests (24 x 48 sky grid, psi in {0, pi/4}):
 #   x=0.1: R_X 0.1494977, R_A/R_X 1.50000000;  x=0.5: R_X 0.1378568, R_A/R_X 1.4999933

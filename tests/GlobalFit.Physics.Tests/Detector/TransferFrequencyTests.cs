@@ -8,8 +8,8 @@ public sealed class TransferFrequencyTests
     [Fact]
     public void Transfer_frequency_of_a_two_and_a_half_gigametre_arm_matches_the_check_value()
     {
-        // Source: check-values.csv row "transfer frequency f* = c/(2 pi L)" = 1.908538064e-02 Hz (CMP; Robson et al.
-        // 2019, arXiv:1803.01944, quote 19.09 mHz). 10 figures printed, so 1e-9 relative.
+        // Source: derived: f* = c/(2 pi L) = 1.908538064e-02 Hz for L = 2.5e9 m (Robson et al. 2019,
+        // arXiv:1803.01944, quote 19.09 mHz). 10 figures, so 1e-9 relative.
         Assert.Equal(1.908538064e-2, TransferFrequency.Hz(2.5e9), 1e-9 * 1.908538064e-2);
         Assert.Equal(1.0, TransferFrequency.Ratio(1.908538064e-2, 2.5e9), 1e-9);
     }

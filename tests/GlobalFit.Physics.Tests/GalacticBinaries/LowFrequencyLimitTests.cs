@@ -14,9 +14,10 @@ public sealed class LowFrequencyLimitTests(ITestOutputHelper output)
     [InlineData(-1.0, 4.2, 2.0, 1.4, 3.0)]
     public void Fast_response_approaches_the_long_wavelength_form_at_a_tenth_of_a_millihertz(double beta, double lambda, double iota, double psi, double phi0)
     {
-        // Source: sheet §F.3 (long-wavelength reference, C.4 DER): X_env,LW = 2 x^2 e^{-2ix} [(n12 n12 - n13 n13):H]
-        // e^{i[Phi - 2 pi f_q t - 2 pi f k.x_1/c]}, Y and Z cyclic. The sheet measured the A/E envelope difference at
-        // 0.08 x rms (largest 0.09 x) and 1 - match ~1e-7 at 0.1 mHz, and advises a tolerance of a few x on bin values
+        // Source: long-wavelength limit (Cutler 1998, arXiv:gr-qc/9703068; derived: expand the link response to second
+        // order in L/c): X_env,LW = 2 x^2 e^{-2ix} [(n12 n12 - n13 n13):H]
+        // e^{i[Phi - 2 pi f_q t - 2 pi f k.x_1/c]}, Y and Z cyclic. An independent computation measured the A/E envelope difference at
+        // 0.08 x rms (largest 0.09 x) and 1 - match ~1e-7 at 0.1 mHz, which suggests a tolerance of a few x on bin values
         // relative to the peak bin and of order x^2 on the mismatch. Asserted: largest bin difference <= 1 x of the
         // peak, 1 - overlap <= x^2. One Julian year with the orbit period equal to it and f0 on a bin, so both envelopes
         // are periodic and the plain N-point DFT is exact for the reference. Measured: printed.

@@ -11,8 +11,9 @@ public sealed class OptimalSnrTests(ITestOutputHelper output)
     [InlineData(1.2e-2)]
     public void Snr_averaged_over_orientations_matches_the_sky_averaged_formula(double frequencyHz)
     {
-        // Source: sheet §H (DER): rho_bar^2 = (16/5) A^2 T / S_n(f0) averaged over sky, inclination, polarisation (and
-        // phase), with S_n the exact two-channel sky-averaged sensitivity (SensitivityCurve.ExactStrainPsd, §D.3), so
+        // Source: derived (SensitivityCurve.AveragedSnr): rho_bar^2 = (16/5) A^2 T / S_n(f0) averaged over sky,
+        // inclination, polarisation (and phase), with S_n the exact two-channel sky-averaged sensitivity
+        // (SensitivityCurve.ExactStrainPsd, in the convention of Robson, Cornish & Liu 2019), so
         // A and E only. Monte Carlo over 2000 seeded isotropic orientations, one month of data (the sky average does not
         // depend on the orbital phase). The per-source rho^2 spreads by ~100 % (antenna patterns
         // and inclination), so the mean of 2000 carries a standard error of ~2.2 %; we assert within 4 standard errors
@@ -41,7 +42,7 @@ public sealed class OptimalSnrTests(ITestOutputHelper output)
     [Fact]
     public void Snr_scales_with_amplitude_and_T_adds_little_at_low_frequency()
     {
-        // rho is linear in A (exact up to rounding: 1e-12). Sheet §D.2: T is suppressed by x^2 relative to A/E
+        // rho is linear in A (exact up to rounding: 1e-12). Derived low-frequency limits (InstrumentNoiseModel): T is suppressed by x^2 relative to A/E
         // at low f, so at 1 mHz (x = 0.05) including T changes rho by < 1e-3.
         var generator = new GalacticBinaryTemplateGenerator(30 * 86400.0, 15.0);
         var noise = new AetNoiseModel(InstrumentNoiseSettings.Default);

@@ -40,7 +40,8 @@ public sealed class TemplateAccuracyTests(ITestOutputHelper output)
     [Fact]
     public void Fast_template_matches_the_brute_force_response_over_one_month()
     {
-        // Yardstick: SlowReferenceResponse (exact link formula, exact delays, full cadence; sheet §C.1/§C.2), FFT'd with
+        // Yardstick: SlowReferenceResponse (exact two-point link formula of Estabrook & Wahlquist 1975, exact delays,
+        // full cadence), FFT'd with
         // the same continuous convention, compared on the template's own bins with A/E/T noise weighting (the
         // brute-force spectrum also has leakage tails outside those bins, which no N-bin template can hold). Sources:
         // four seeded random ones (0.1-20 mHz log-uniform, quadrupole fdot) plus the two ends of the range. Criterion of
@@ -84,7 +85,7 @@ public sealed class TemplateAccuracyTests(ITestOutputHelper output)
     [Trait("Category", "Long")]
     public void Fast_template_matches_the_brute_force_response_with_flexing_orbits()
     {
-        // EccentricOrbits (sheet §B.2: arms flex by ~0.5 % over a year, light times iterated in the brute force). The
+        // EccentricOrbits (Dhurandhar et al. 2005: arms flex by ~0.5 % over a year, light times iterated in the brute force). The
         // fast response takes arm directions and midpoints from the orbits but one nominal delay L/c; the delay error
         // shifts the TDI phase by ~x * 0.0025. One month at 20 s, four seeded sources; about ten times slower than with
         // rigid orbits, hence Long. Measured worst overlap 0.999992.

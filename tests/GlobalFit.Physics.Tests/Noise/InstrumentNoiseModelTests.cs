@@ -1,4 +1,5 @@
 using GlobalFit.Physics.Noise;
+using GlobalFit.Physics.Tests.CheckValues;
 using Xunit;
 
 namespace GlobalFit.Physics.Tests.Noise;
@@ -7,35 +8,35 @@ public class InstrumentNoiseModelTests
 {
     private static readonly InstrumentNoiseModel Model = InstrumentNoiseModel.Default;
 
-    // The CSV prints 7 significant figures, so half a unit in the last place is 5e-7 relative; 1e-6 allows
+    // The check values print 7 significant figures, so half a unit in the last place is 5e-7 relative; 1e-6 allows
     // for the rounding of the printed value itself.
     private const double SevenFigures = 1e-6;
 
-    // Source: check-values.csv "transfer frequency" (CMP, f* = c/(2πL), L = 2.5e9 m): 1.908538064e-2 Hz, 10 figures.
+    /// <summary>Rows of CheckValues/instrument-noise.csv (each names its source).</summary>
+    public static IEnumerable<object[]> ComponentRows => CheckValueTable.Load("instrument-noise").Numbers("f_hz", "s_acc_per_hz", "s_oms_per_hz");
+
+    /// <summary>Rows of CheckValues/instrument-noise.csv (each names its source).</summary>
+    public static IEnumerable<object[]> TdiRows => CheckValueTable.Load("instrument-noise").Numbers("f_hz", "s_x_per_hz", "s_a_per_hz", "s_t_per_hz");
+
+    // Source: derived: f* = c/(2πL) = 1.908538064e-2 Hz for L = 2.5e9 m, 10 figures.
     [Fact]
     public void Transfer_frequency_of_the_default_arm_is_19_mHz()
     {
         RelativeAssert.Close(1.908538064e-2, InstrumentNoiseSettings.Default.TransferFrequencyHz, 1e-9);
     }
 
-    // Source: check-values.csv rows "S_acc fractional frequency" and "S_oms fractional frequency" (CMP, sheet §D.1).
+    // Source: CheckValues/instrument-noise.csv (derived from the allocation of Robson, Cornish & Liu 2019).
     [Theory]
-    [InlineData(1e-4, 4.312115e-39, 1.581334e-40)]
-    [InlineData(1e-3, 2.943102e-42, 1.680157e-42)]
-    [InlineData(1e-2, 8.743224e-44, 9.899088e-42)]
-    [InlineData(1e-1, 6.193072e-42, 9.883276e-40)]
+    [MemberData(nameof(ComponentRows))]
     public void Component_noises_in_fractional_frequency_match_the_reference(double fHz, double acceleration, double oms)
     {
         RelativeAssert.Close(acceleration, Model.AccelerationPsd(fHz), SevenFigures);
         RelativeAssert.Close(oms, Model.OmsPsd(fHz), SevenFigures);
     }
 
-    // Source: check-values.csv rows "S_X", "S_A = S_E", "S_T TDI 1.5 equal arms" (CMP, sheet §D.2, formula DER).
+    // Source: CheckValues/instrument-noise.csv (derived: equal-arm first-generation TDI of the same allocation).
     [Theory]
-    [InlineData(1e-4, 7.645787e-42, 1.146868e-41, 9.541799e-49)]
-    [InlineData(1e-3, 5.896638e-43, 8.844449e-43, 1.016770e-46)]
-    [InlineData(1e-2, 4.087145e-41, 5.864149e-41, 5.331360e-42)]
-    [InlineData(1e-1, 1.199567e-38, 1.504120e-38, 5.904598e-39)]
+    [MemberData(nameof(TdiRows))]
     public void First_generation_TDI_noise_matches_the_reference(double fHz, double psdX, double psdA, double psdT)
     {
         RelativeAssert.Close(psdX, Model.PsdX(fHz), SevenFigures);
@@ -44,14 +45,14 @@ public class InstrumentNoiseModelTests
         RelativeAssert.Close(psdT, Model.PsdT(fHz), SevenFigures);
     }
 
-    // Source: check-values.csv row "CSD S_XY TDI 1.5 equal arms" at 1 mHz (CMP, sheet §D.2).
+    // Source: derived: S_XY = -8 sin²x cos x [S_oms + 4 S_acc] at 1 mHz, evaluated independently, 7 figures.
     [Fact]
     public void Cross_spectrum_of_X_and_Y_matches_the_reference()
     {
         RelativeAssert.Close(-2.947811e-43, Model.CsdXY(1e-3), SevenFigures);
     }
 
-    // Identity (sheet §C.3 and §D.2, DER): S_A = S_X − S_XY and S_T = S_X + 2 S_XY for A, E, T built from
+    // Identity (derived from the A/E/T coefficients of TdiCombination): S_A = S_X − S_XY and S_T = S_X + 2 S_XY for A, E, T built from
     // X, Y, Z with equal PSDs and equal real CSDs. Exact algebra, so 1e-12 relative.
     [Theory]
     [InlineData(3e-4)]
@@ -63,7 +64,8 @@ public class InstrumentNoiseModelTests
         RelativeAssert.Close(Model.PsdX(fHz) + 2.0 * Model.CsdXY(fHz), Model.PsdT(fHz), 1e-9);
     }
 
-    // Source: check-values.csv "S_X TDI 2.0 equal arms = 4 sin²(2x) S_X1.5" at 1 and 10 mHz (CMP, sheet §C.2).
+    // Source: derived: second-generation S_X = 4 sin²(2x) S_X(first) for equal static arms, evaluated independently
+    // at 1 and 10 mHz, 7 figures.
     [Theory]
     [InlineData(1e-3, 2.580670e-44)]
     [InlineData(1e-2, 1.227169e-40)]
@@ -73,7 +75,7 @@ public class InstrumentNoiseModelTests
         RelativeAssert.Close(expected, second.PsdX(fHz), SevenFigures);
     }
 
-    // Source: check-values.csv "S_A/S_X low-frequency limit" = 1.5 (DER, sheet §D.2); the correction is O(x²),
+    // Source: derived: S_A/S_X → 1.5 at low frequency (limits of the formulas in InstrumentNoiseModel); the correction is O(x²),
     // about 2e-10 at 1e-6 Hz, so 1e-8.
     [Fact]
     public void A_to_X_ratio_tends_to_one_and_a_half_at_low_frequency()
@@ -81,7 +83,7 @@ public class InstrumentNoiseModelTests
         Assert.Equal(1.5, Model.PsdA(1e-6) / Model.PsdX(1e-6), 1e-8);
     }
 
-    // Sheet §D.2 low-frequency limit S_T → 8x⁴ S_oms + 8x⁶ S_acc, next terms O(x²) relative: 1e-6 at x ≈ 5e-4.
+    // Derived low-frequency limit S_T → 8x⁴ S_oms + 8x⁶ S_acc, next terms O(x²) relative: 1e-6 at x ≈ 5e-4.
     [Fact]
     public void T_noise_follows_its_low_frequency_limit()
     {

@@ -9,7 +9,7 @@ public class NoiseSynthesisTests
 {
     private static readonly AetNoiseModel Model = new(InstrumentNoiseSettings.Default, new GalacticConfusionSettings(1.0));
 
-    // Source: sheet §H, E|ñ_k|² = (T/2) S_k (one-sided; FourierTransform convention). For the synthesised noise
+    // Source: one-sided noise statistics E|ñ_k|² = (T/2) S_k (derived from the FourierTransform convention). For the synthesised noise
     // each ratio r_k = |ñ_k|²/((T/2)S_k) is exactly Exp(1) and independent across bins, so the mean over the
     // M = 8191 interior bins has standard deviation 1/√M = 0.011; the 4σ bound (0.044) fails with probability
     // 6e-5 for a random seed (the seed is fixed, so the test is deterministic).
@@ -70,7 +70,7 @@ public class NoiseSynthesisTests
         Assert.True((spectrum[n / 2] - last).Magnitude < 1e-9 * last.Magnitude);
     }
 
-    // Source: sheet §H / Parseval: the expected mean square is the discrete ∫S df, Δf(Σ_{0<k<N/2} S_k + S_{N/2}/2).
+    // Source: derived (Parseval): the expected mean square is the discrete ∫S df, Δf(Σ_{0<k<N/2} S_k + S_{N/2}/2).
     // For a Lorentzian S = S0/(1 + (f/fc)²) the continuous integral is S0 fc atan(f_Nyq/fc); the discrete sum
     // differs by O(Δf/fc) = 1e-4. The sampling standard deviation of the mean square is Δf √(Σ S_k²) (each complex
     // bin contributes S_k Δf × Exp(1)); the 4σ bound fails with probability 6e-5.

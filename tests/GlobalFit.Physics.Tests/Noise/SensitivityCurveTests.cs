@@ -1,4 +1,5 @@
 using GlobalFit.Physics.Noise;
+using GlobalFit.Physics.Tests.CheckValues;
 using Xunit;
 
 namespace GlobalFit.Physics.Tests.Noise;
@@ -7,24 +8,21 @@ public class SensitivityCurveTests
 {
     private static readonly SensitivityCurve Instrumental = new(InstrumentNoiseSettings.Default);
 
-    // Source: check-values.csv rows "Robson S_n instrument only" and "Robson sqrt(S_n)" (CMP from Robson, Cornish &
-    // Liu 2019, arXiv:1803.01944, Eq. 1 form as restated in sheet §D.3; formula MEM, cross-checked DER).
-    // Seven printed figures: 1e-6 relative.
+    /// <summary>Rows of CheckValues/robson-sensitivity.csv (each names its source).</summary>
+    public static IEnumerable<object[]> RobsonRows => CheckValueTable.Load("robson-sensitivity").Numbers("f_hz", "s_n_per_hz", "sqrt_s_n_per_rthz");
+
+    // Source: CheckValues/robson-sensitivity.csv (derived from Robson, Cornish & Liu 2019, arXiv:1803.01944, Eq. 1
+    // form; formula from memory, cross-checked by an exact identity below). Seven printed figures: 1e-6 relative.
     [Theory]
-    [InlineData(1e-4, 2.113467e-33, 4.597245e-17)]
-    [InlineData(1e-3, 1.634101e-38, 1.278319e-19)]
-    [InlineData(3e-3, 3.040650e-40, 1.743746e-20)]
-    [InlineData(1e-2, 1.443169e-40, 1.201320e-20)]
-    [InlineData(0.0190853806, 1.952290e-40, 1.397244e-20)]
-    [InlineData(0.1, 2.129583e-39, 4.614741e-20)]
+    [MemberData(nameof(RobsonRows))]
     public void Robson_sensitivity_matches_the_reference(double fHz, double psd, double asd)
     {
         RelativeAssert.Close(psd, Instrumental.RobsonStrainPsd(fHz), 1e-6);
         RelativeAssert.Close(asd, Instrumental.RobsonStrainAsd(fHz), 1e-6);
     }
 
-    // Source: check-values.csv "frequency of minimum of Robson S_n" 7.2574e-3 Hz (grid search, 4 digits) and
-    // "minimum" 1.3872e-40 (5 digits). Golden-section search here; tolerances are the printed precision.
+    // Source: derived: an independent grid search of the same S_n put its minimum at 7.2574e-3 Hz (4 digits) with
+    // value 1.3872e-40 (5 digits). Golden-section search here; tolerances are the printed precision.
     [Fact]
     public void Robson_sensitivity_has_its_minimum_near_7_mHz()
     {
@@ -40,7 +38,7 @@ public class SensitivityCurveTests
         RelativeAssert.Close(1.3872e-40, Instrumental.RobsonStrainPsd(fMin), 5e-5);
     }
 
-    // Source: check-values.csv "identity S_X/(16 x² sin² x) / P_n" = 1 (DER, exact, checked to 1e-12).
+    // Source: derived: S_X/(16 x² sin² x) = P_n exactly (algebra of the two forms; checked independently to 1e-12).
     [Theory]
     [InlineData(1e-4)]
     [InlineData(2.2e-3)]
@@ -53,8 +51,8 @@ public class SensitivityCurveTests
         Assert.Equal(1.0, fromTdi / Instrumental.MichelsonStrainNoise(fHz), 1e-12);
     }
 
-    // At low frequency both forms reduce to P_n/(3/10), and below ~5 mHz they agree to within 3 % (the 2 % of the sheet
-    // §C.4 response table plus the O(x²) departure of S_A/S_X from 1.5; measured 2.7 % at 5 mHz). Near f* they part by more than the
+    // At low frequency both forms reduce to P_n/(3/10), and below ~5 mHz they agree to within 3 % (the 2 % of the
+    // response comparison in SkyAveragedResponseTests plus the O(x²) departure of S_A/S_X from 1.5; measured 2.7 % at 5 mHz). Near f* they part by more than the
     // 13 % of the response alone: S_A/S_X falls below 1.5 as well, and the exact S_n is 25 % below Robson's
     // at 19 mHz (not asserted as a reference value; documented on SensitivityCurve).
     [Theory]
@@ -76,7 +74,8 @@ public class SensitivityCurveTests
         RelativeAssert.Close(Instrumental.ExactStrainPsd(fZero * (1 + 1e-6)), at, 1e-4);
     }
 
-    // Source: check-values.csv "Robson S_n including confusion" at 1 mHz (CMP, sheet §D.3 + §E.1, MEM formulas).
+    // Source: derived: Robson, Cornish & Liu 2019 S_n (Eq. 1) plus their Eq. 14 foreground at 1 mHz (formulas from
+    // memory), evaluated independently, 7 figures.
     [Theory]
     [InlineData(0.5, 1.444515e-37)]
     [InlineData(1.0, 1.826926e-37)]
@@ -88,7 +87,8 @@ public class SensitivityCurveTests
         RelativeAssert.Close(expected, curve.RobsonStrainPsd(1e-3), 1e-6);
     }
 
-    // Source: check-values.csv "averaged SNR" rows (CMP, sheet §H): A = 3.893858e-22, f = 3 mHz, T = 4 Julian yr,
+    // Source: derived: worked example of SensitivityCurve.AveragedSnr, evaluated independently: A = 3.893858e-22 (Mc =
+    // 0.5 Msun, D = 1 kpc), f = 3 mHz, T = 4 Julian yr,
     // S_n (Robson + 4-yr confusion) = 3.125700e-40 → 442.65305; instrument only → 448.80108. The amplitude is
     // printed to 7 figures, so 1e-6 relative.
     [Fact]
@@ -99,7 +99,7 @@ public class SensitivityCurveTests
         RelativeAssert.Close(3.125700e-40, withConfusion.RobsonStrainPsd(3e-3), 1e-6);
         RelativeAssert.Close(442.65305, SensitivityCurve.AveragedSnr(3.893858e-22, years4, withConfusion.RobsonStrainPsd(3e-3)), 1e-6);
         RelativeAssert.Close(448.80108, SensitivityCurve.AveragedSnr(3.893858e-22, years4, Instrumental.RobsonStrainPsd(3e-3)), 1e-6);
-        // h_eff² / (f S_n) = ρ̄² by construction of h_eff (sheet §H).
+        // h_eff² / (f S_n) = ρ̄² by construction of h_eff (SensitivityCurve.EffectiveStrain).
         double hEff = SensitivityCurve.EffectiveStrain(3.893858e-22, 3e-3, years4);
         double snr = hEff / withConfusion.RobsonCharacteristicNoise(3e-3);
         RelativeAssert.Close(442.65305, snr, 1e-6);

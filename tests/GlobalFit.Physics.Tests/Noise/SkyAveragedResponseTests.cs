@@ -1,30 +1,24 @@
 using GlobalFit.Physics.Noise;
+using GlobalFit.Physics.Tests.CheckValues;
 using Xunit;
 
 namespace GlobalFit.Physics.Tests.Noise;
 
 public class SkyAveragedResponseTests
 {
-    // Source: shared/reference/detector-noise-gb.md §C.4 table and check-values.csv rows
-    // "R_X exact static equal-arm" (CMP, numerical sky/polarisation quadrature converged to ~1e-5).
-    // The table prints 5 decimals, so the tolerance is 1e-5 absolute plus half a unit in the last place.
+    /// <summary>Rows of CheckValues/sky-averaged-response.csv (each names its source).</summary>
+    public static IEnumerable<object[]> MichelsonRows => CheckValueTable.Load("sky-averaged-response").Numbers("x", "r_x");
+
+    // Source: CheckValues/sky-averaged-response.csv (derived: an independent numerical sky/polarisation quadrature
+    // converged to ~1e-5). The table prints 5 decimals, so the tolerance is 1e-5 absolute plus half a unit in the last place.
     [Theory]
-    [InlineData(0.1, 0.14950)]
-    [InlineData(0.25, 0.14688)]
-    [InlineData(0.5, 0.13786)]
-    [InlineData(0.75, 0.12384)]
-    [InlineData(1.0, 0.10624)]
-    [InlineData(1.25, 0.08673)]
-    [InlineData(1.5, 0.06708)]
-    [InlineData(2.0, 0.03348)]
-    [InlineData(2.5, 0.01365)]
-    [InlineData(3.0, 0.00812)]
+    [MemberData(nameof(MichelsonRows))]
     public void Michelson_response_matches_the_reference_quadrature_table(double x, double expected)
     {
         Assert.Equal(expected, SkyAveragedResponse.MichelsonX(x), 1.5e-5);
     }
 
-    // Source: check-values.csv rows "R_X exact at 1 mHz / 3 mHz / 10 mHz" (CMP, numerical quadrature),
+    // Source: derived: the same independent quadrature at 1, 3 and 10 mHz,
     // x = f/f* with f* = 1.908538064e-2 Hz; six decimals printed, so 1.5e-6 absolute.
     [Theory]
     [InlineData(1e-3, 0.149862)]
@@ -36,17 +30,17 @@ public class SkyAveragedResponseTests
         Assert.Equal(expected, SkyAveragedResponse.MichelsonX(x), 1.5e-6);
     }
 
-    // Source: sheet §C.4 (DER): R_X(0) = 3/20 = sin²60° × 1/5. Exact limit, so 1e-12.
+    // Source: derived (long-wavelength limit of a 60° Michelson): R_X(0) = 3/20 = sin²60° × 1/5. Exact limit, so 1e-12.
     [Fact]
     public void Michelson_response_tends_to_three_twentieths_at_low_frequency()
     {
         Assert.Equal(0.15, SkyAveragedResponse.MichelsonX(0.0), 1e-12);
     }
 
-    // Source: sheet §C.4 and check-values.csv row "R_A/R_X" (DER, "numerically to 1e-5"): R_A = 1.5 R_X.
+    // Source: derived (numerical sky average): R_A = 1.5 R_X at low frequency.
     // This holds only while the T channel is deaf (see the next test): at x ≤ 0.3 the departure is below
-    // 1e-6, which we assert; at x = 1 it is 5e-4 and at x = 2.7 the ratio is 0.83, so the sheet's "at all f"
-    // is wrong above about 0.3 f*.
+    // 1e-6, which we assert; at x = 1 it is 5e-4 and at x = 2.7 the ratio is 0.83, so a claim that it holds
+    // "at all f" is wrong above about 0.3 f*.
     [Theory]
     [InlineData(0.0)]
     [InlineData(0.1)]
@@ -72,7 +66,7 @@ public class SkyAveragedResponseTests
         Assert.Equal(3.0 * SkyAveragedResponse.MichelsonX(x), sum, 1e-9);
     }
 
-    // Source: sheet §C.3/§C.4 (DER): A and E are equivalent channels and their isotropic cross-response
+    // Source: derived (symmetry of the equilateral triangle under the A/E/T map): A and E are equivalent channels and their isotropic cross-response
     // vanishes. 1e-10 is the quadrature's own convergence level.
     [Theory]
     [InlineData(0.4)]
@@ -85,7 +79,7 @@ public class SkyAveragedResponseTests
         Assert.True(averages.AE.Magnitude < 1e-10, $"|<A E*>| = {averages.AE.Magnitude}");
     }
 
-    // The T channel responds only at order x² relative to A (sheet §D.2 low-frequency limits: T is the
+    // The T channel responds only at order x² relative to A (derived low-frequency limits of InstrumentNoiseModel: T is the
     // "null" channel); at x = 0.05 R_T/R_A must be below 1e-2.
     [Fact]
     public void T_channel_response_is_suppressed_at_low_frequency()
@@ -136,7 +130,8 @@ public class SkyAveragedResponseTests
         Assert.Equal(direct.T, SkyAveragedResponse.ChannelT(x), 1e-7);
     }
 
-    // Source: sheet §C.4 last table row (CMP): 2 R_X / Robson's 0.3/(1 + 0.6x²) is within 2 % below ~5 mHz
+    // Source: derived: the independent quadrature compared with Robson, Cornish & Liu 2019's approximate response,
+    // 2 R_X / (0.3/(1 + 0.6x²)), is within 2 % below ~5 mHz
     // (x ≈ 0.26) and at most 13.3 % off (x ≈ 1); we assert the same bounds over a grid.
     [Fact]
     public void Robson_approximation_is_within_thirteen_percent_up_to_one_and_a_half_transfer_frequencies()

@@ -73,7 +73,7 @@ public class WelchEstimatorTests
         Assert.InRange(variance * kEff, 0.4, 1.8);
     }
 
-    // A, E, T noises are independent (sheet §D.2: S_AE = S_AT = S_ET = 0). For independent channels the
+    // A, E, T noises are independent (derived for equal arms: S_AE = S_AT = S_ET = 0). For independent channels the
     // normalised Welch CSD c = S_ab/√(S_a S_b) has E c = 0, Var(Re c) = Var(Im c) = 1/(2K') and E|c|² = 1/K'.
     [Fact]
     public void Cross_spectra_between_A_E_and_T_are_consistent_with_zero()

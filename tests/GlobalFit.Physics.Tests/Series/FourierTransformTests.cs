@@ -58,7 +58,7 @@ public class FourierTransformTests
     }
 
     // Parseval in the continuous convention: dt Σ h² = df Σ_{k=0}^{N-1} |h̃_k|², with the one-sided bins
-    // counted twice except DC and Nyquist (shared/reference/detector-noise-gb.md §0).
+    // counted twice except DC and Nyquist (derived from the transform's definition in FourierTransform).
     [Theory]
     [InlineData(2048)]
     [InlineData(1500)]

@@ -59,7 +59,8 @@ public class InnerProductTests
         Assert.Throws<ArgumentException>(() => InnerProduct.Real(new Complex[3], new Complex[4], new double[3], 1));
     }
 
-    // (h|h) = h0² T / S for h0 cos(2π f0 t) with a flat PSD (shared/reference/detector-noise-gb.md §H, DER).
+    // (h|h) = h0² T / S for h0 cos(2π f0 t) with a flat PSD (derived: Parseval with the inner product of Cutler &
+    // Flanagan 1994).
     [Fact]
     public void Snr_of_a_sinusoid_in_white_noise_matches_the_closed_form()
     {

@@ -11,7 +11,7 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// residual (the data minus every source the other windows hold).</summary>
 /// <remarks>
 /// <para>ln L(θ_1..θ_k) = (d|h) − ½(h|h) with h = Σ_j h_j, the log-likelihood ratio against the empty model on the
-/// window's bins (shared/reference/detector-noise-gb.md §H; the constant −½(d|d) is dropped, which leaves every
+/// window's bins (Gaussian-noise likelihood with the inner product of Cutler &amp; Flanagan 1994; the constant −½(d|d) is dropped, which leaves every
 /// acceptance ratio unchanged). Expanded as <c>Σ_j [(d|h_j) − ½(h_j|h_j)] − Σ_{j&lt;l} (h_j|h_l)</c>, so a proposal
 /// that moves one source renders one template: the template of every source vector seen recently is kept, keyed by
 /// its exact coordinates, with its two inner products. Pair terms are summed only over the bins two templates share.

@@ -13,7 +13,7 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// core owns inside the padded window; the spare padding − N/2 bins (at most half a core) become the drift margin of
 /// <see cref="GalacticBinaryBandWindow.SourceRange"/>. Cores at least N wide keep the templates of two same-stage
 /// windows (two cores apart) from sharing a bin, so a stage's windows are independent given the rest of the fit
-/// (the blocked Gibbs scheme of shared/design/architecture.md).</para>
+/// (the blocked-Gibbs schedule described in DEVELOPERS.md, "Data flow of one iteration").</para>
 /// <para>Building the plan and every look-up are linear in the number of windows (look-up by frequency is O(1)).
 /// Immutable.</para>
 /// </remarks>

@@ -11,13 +11,14 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// <remarks>
 /// <para>For fixed (f0, ḟ, β, λ) the template is linear in the complex amplitudes x = (P, Q) of
 /// <see cref="FStatisticAmplitudes"/>, and ln L = Re(x^H n) − ½ x^H G x with <c>G = [[U, W*], [W, V]]</c>
-/// (shared/reference/detector-noise-gb.md §G.2). So x is drawn from the Gaussian N(G⁻¹n, G⁻¹) — the likelihood's own
+/// (the 2×2 form of <see cref="FStatistic"/>). So x is drawn from the Gaussian N(G⁻¹n, G⁻¹) — the likelihood's own
 /// shape — via x = G⁻¹n + L^{−H} ξ with G = L L^H and ξ four standard normals; its density in the four real components
 /// is <c>(2π)^−2 det G e^{−ξ^Hξ/2}</c> (the real 4 × 4 form of a Hermitian G has determinant (det G)²).</para>
 /// <para>x is mapped to (A, cos ι, ψ, φ0) by <see cref="FStatisticAmplitudes.ToExtrinsics"/>. The map is two-to-one on
 /// the prior's ψ ∈ [0, π), φ0 ∈ [0, 2π) ((ψ + π/2, φ0 + π) is the same signal), so one of the two copies is picked
-/// with probability ½. Its Jacobian: with R± = |P ± iQ| = A(1 ± cos ι)² and arg(P ± iQ) = φ0 ± 2ψ (§G.3), and
-/// d⁴(P ± iQ) = 4 d⁴x, one finds <c>d⁴x = 4 A³ (1 − cos²ι)³ dA d(cos ι) dψ dφ0</c> (derived here [DER]; the tests
+/// with probability ½. Its Jacobian: with R± = |P ± iQ| = A(1 ± cos ι)² and arg(P ± iQ) = φ0 ± 2ψ (the inversion of
+/// <see cref="FStatisticAmplitudes"/>), and
+/// d⁴(P ± iQ) = 4 d⁴x, one finds <c>d⁴x = 4 A³ (1 − cos²ι)³ dA d(cos ι) dψ dφ0</c> (derived here; the tests
 /// compare it with a finite-difference determinant). Finally ρ̂ = A s adds 1/s. The density therefore is
 /// <c>b = b_map(f0, ḟ, sin β, λ) · (2π)^−2 det G e^{−ξ^Hξ/2} · 4A³(1 − cos²ι)³ / (2 s)</c>.</para>
 /// <para>It depends on the residual only, never on the chain, as <see cref="IBirthDensity"/> requires. Not

@@ -4,8 +4,8 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// <c>p(ρ) = 3ρ/(4ρ*²) (1 + ρ/(4ρ*))^−5</c> on ρ ≥ 0, truncated at ρ_max.</summary>
 /// <remarks>
 /// <para>Littenberg, Cornish, Lackeos &amp; Robson 2020, "Global analysis of the gravitational wave signal from
-/// galactic binaries", PRD 101, 123021, arXiv:2004.08464, the SNR-based amplitude prior (form recalled from memory,
-/// [MEM]; the factor 3 that normalises it is derived here, [DER]). It vanishes linearly at ρ = 0, so a sampler gains
+/// galactic binaries", PRD 101, 123021, arXiv:2004.08464, the SNR-based amplitude prior (form from memory; the
+/// factor 3 that normalises it is derived here: integral of the density over ρ ≥ 0). It vanishes linearly at ρ = 0, so a sampler gains
 /// nothing by shrinking a source to nothing, peaks at ρ = ρ* and falls as ρ^−4, so loud sources are not penalised
 /// much. With u = ρ/(4ρ*) and s = 1 + u the cumulative distribution is <c>C(ρ) = 1 − 4s^−3 + 3s^−4</c>, which the
 /// tests check against numerical integration; the truncated density is p(ρ)/C(ρ_max).</para>

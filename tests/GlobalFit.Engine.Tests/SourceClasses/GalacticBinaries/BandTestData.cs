@@ -33,7 +33,7 @@ internal sealed class BandTestData
             InverseA[k] = 1.0 / sa;
             InverseE[k] = 1.0 / se;
             // Each of the real and imaginary parts has variance S/(4Δf), so that <(n|h)²> = (h|h) for the inner product
-            // 4Δf Re Σ a b*/S (shared/reference/detector-noise-gb.md §H).
+            // 4Δf Re Σ a b*/S (Physics InnerProduct, after Cutler & Flanagan 1994).
             double sigmaA = Math.Sqrt(sa / (4.0 * df)), sigmaE = Math.Sqrt(se / (4.0 * df));
             if (noise)
             {

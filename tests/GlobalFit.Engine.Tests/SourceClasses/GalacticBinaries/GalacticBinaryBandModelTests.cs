@@ -8,7 +8,7 @@ namespace GlobalFit.Engine.Tests.SourceClasses.GalacticBinaries;
 public class GalacticBinaryBandModelTests
 {
     // ln L = (d|h) − ½(h|h) for h the sum of overlapping templates equals ½(d|d) − ½(d − h|d − h) computed directly on
-    // the window (shared/reference/detector-noise-gb.md §H). Tolerance 1e-9 relative: only summation order differs.
+    // the window (derived: expand the Gaussian likelihood with the inner product of Cutler & Flanagan 1994). Tolerance 1e-9 relative: only summation order differs.
     [Fact]
     public void The_pairwise_likelihood_equals_the_residual_norm_of_the_summed_templates()
     {

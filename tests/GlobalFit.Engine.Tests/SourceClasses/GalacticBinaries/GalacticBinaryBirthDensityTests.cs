@@ -28,7 +28,7 @@ public class GalacticBinaryBirthDensityTests
         return values;
     }
 
-    // [DER] d⁴x = 4A³(1 − cos²ι)³ dA d(cos ι) dψ dφ0, derived in GalacticBinaryBirthDensity's remarks; checked against the
+    // Derived: d⁴x = 4A³(1 − cos²ι)³ dA d(cos ι) dψ dφ0, in GalacticBinaryBirthDensity's remarks; checked against the
     // determinant of a central-difference Jacobian of FStatisticAmplitudes.FromExtrinsics (step 1e-6 relative, so the
     // truncation error is ~1e-12 and round-off ~1e-10 relative; tolerance 1e-6 relative).
     [Theory]
@@ -75,7 +75,7 @@ public class GalacticBinaryBirthDensityTests
     }
 
     // For fixed intrinsics the amplitude part is the likelihood's own Gaussian: ln b differs between two amplitude sets
-    // by Δ ln L (Physics band likelihood, shared/reference/detector-noise-gb.md §H) plus the Jacobian difference.
+    // by Δ ln L (Physics band likelihood, GalacticBinaryBandLikelihood) plus the Jacobian difference.
     // Tolerance 1e-6 of the ln L scale (~450 at SNR 30): the F-statistic basis and the rendered template agree to round-off.
     [Fact]
     public void The_amplitude_density_has_the_shape_of_the_likelihood()

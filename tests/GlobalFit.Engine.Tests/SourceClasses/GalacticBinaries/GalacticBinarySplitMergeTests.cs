@@ -44,7 +44,7 @@ public sealed class GalacticBinarySplitMergeTests
         Assert.InRange(tried, 870, 959);
     }
 
-    // ln|J| = ln ρ̂ (derived in GalacticBinarySplitMerge's remarks, [DER]) against the determinant of a central-difference
+    // ln|J| = ln ρ̂ (derived in GalacticBinarySplitMerge's remarks) against the determinant of a central-difference
     // Jacobian of the 16 → 16 split map. Steps are 1e-6 of each coordinate's scale: truncation ~1e-12, round-off ~1e-9
     // relative per entry, so the determinant agrees to ~1e-7; tolerance 1e-5 relative.
     [Theory]

@@ -3,7 +3,7 @@ using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 namespace GlobalFit.Engine.Tests.SourceClasses.GalacticBinaries;
 
 // The prior p(ρ) = 3ρ/(4ρ*²)(1 + ρ/(4ρ*))^−5 of Littenberg, Cornish et al. 2020 (PRD 101, 123021, arXiv:2004.08464),
-// recalled from memory [MEM]: these tests check the identities that must hold whatever the paper's exact typesetting.
+// from memory: these tests check the identities that must hold whatever the paper's exact typesetting.
 public class SnrAmplitudePriorTests
 {
     private static double Integrate(Func<double, double> f, double a, double b, int n)

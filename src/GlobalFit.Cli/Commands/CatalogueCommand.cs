@@ -1,7 +1,7 @@
 using System.CommandLine;
 using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Runs;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Commands;

@@ -1,8 +1,7 @@
 using System.CommandLine;
 using GlobalFit.Cli.Console;
-using GlobalFit.Engine.Runs;
-
 using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.Runs;
 
 namespace GlobalFit.Cli.Commands;
 

@@ -4,14 +4,13 @@ using System.Text;
 using Akka.Actor;
 using GlobalFit.Engine.Actors;
 using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Telemetry;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Files;
-
-using GlobalFit.Engine.Orchestration;
 
 namespace GlobalFit.Engine.Runs;
 

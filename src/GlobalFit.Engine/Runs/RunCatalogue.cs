@@ -1,8 +1,8 @@
 using System.Collections.Immutable;
 using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Runs;

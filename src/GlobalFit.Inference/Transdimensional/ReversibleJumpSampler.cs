@@ -4,8 +4,8 @@ using GlobalFit.Inference.Parameters;
 using GlobalFit.Inference.Proposals;
 using GlobalFit.Inference.Random;
 using GlobalFit.Inference.State;
-using GlobalFit.Inference.Tempering;
 using GlobalFit.Inference.Targets;
+using GlobalFit.Inference.Tempering;
 
 namespace GlobalFit.Inference.Transdimensional;
 

@@ -2,8 +2,8 @@ using System.Collections.Immutable;
 using System.Globalization;
 using System.Text.Json;
 using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Physics.Files;
 using PureHDF;
 

@@ -1,11 +1,9 @@
 using GlobalFit.Engine.Checkpoints;
+using GlobalFit.Engine.Orchestration;
 using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Tests.Catalogue;
 using GlobalFit.Physics.Files;
-
 using GlobalFit.Tests.Shared;
-
-using GlobalFit.Engine.Orchestration;
 
 namespace GlobalFit.Engine.Tests.Runs;
 

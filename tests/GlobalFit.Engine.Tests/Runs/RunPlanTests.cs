@@ -2,7 +2,6 @@ using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Tests.Catalogue;
 using GlobalFit.Physics.Files;
-
 using GlobalFit.Tests.Shared;
 
 namespace GlobalFit.Engine.Tests.Runs;

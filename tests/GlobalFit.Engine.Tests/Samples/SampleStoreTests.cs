@@ -1,6 +1,6 @@
-using GlobalFit.Engine.Tests.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Samples;
+using GlobalFit.Engine.Tests.Catalogue;
 using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Tests.Samples;

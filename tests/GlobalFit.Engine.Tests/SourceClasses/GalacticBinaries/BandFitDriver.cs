@@ -1,10 +1,9 @@
 using System.Collections.Immutable;
 using System.Numerics;
+using GlobalFit.Engine.Fitting;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.GalacticBinaries;
 using GlobalFit.Physics.Series;
-
-using GlobalFit.Engine.Fitting;
 
 namespace GlobalFit.Engine.Tests.SourceClasses.GalacticBinaries;
 

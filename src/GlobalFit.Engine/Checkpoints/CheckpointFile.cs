@@ -34,6 +34,35 @@ public static class CheckpointFile
         ArgumentNullException.ThrowIfNull(checkpoint);
         Directory.CreateDirectory(Folder(runFolder));
         string temporary = Path.Combine(Folder(runFolder), "latest.tmp");
+        try
+        {
+            WriteTemporary(temporary, checkpoint);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            // The previous checkpoints stay as they were; a half-written temporary file is not left behind.
+            TryDelete(temporary);
+            throw new IOException($"{temporary} cannot be written: {FileProblem.Describe(temporary, e)}", e);
+        }
+        string latest = LatestPath(runFolder);
+        if (File.Exists(latest)) File.Move(latest, PreviousPath(runFolder), overwrite: true);
+        File.Move(temporary, latest);
+    }
+
+    private static void TryDelete(string path)
+    {
+        try
+        {
+            if (File.Exists(path)) File.Delete(path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            // Nothing more can be done here; the write error that brought us here is what gets reported.
+        }
+    }
+
+    private static void WriteTemporary(string temporary, RunCheckpoint checkpoint)
+    {
         using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
         {
             // The payload is serialised straight to the file behind a placeholder header, which is filled in once its
@@ -55,9 +84,6 @@ public static class CheckpointFile
             stream.Write(header);
             stream.Flush(flushToDisk: true);
         }
-        string latest = LatestPath(runFolder);
-        if (File.Exists(latest)) File.Move(latest, PreviousPath(runFolder), overwrite: true);
-        File.Move(temporary, latest);
     }
 
     /// <summary>True when the run folder holds at least one checkpoint file.</summary>

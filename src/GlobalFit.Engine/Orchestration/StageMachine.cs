@@ -124,19 +124,28 @@ public sealed class StageMachine
         else BeginIteration();
     }
 
-    /// <summary>A checkpoint write ended; <paramref name="problem"/> is null when it succeeded.</summary>
+    /// <summary>The iteration's samples could not be written: the run stops at once, with the last good checkpoint kept
+    /// (a resume cuts the store back to it).</summary>
+    /// <param name="iteration">The iteration whose samples were being appended.</param>
+    /// <param name="problem">The file and the cause.</param>
+    public void OnAppendFailed(long iteration, string problem)
+    {
+        if (_finished || !_pending.Complete(PendingStep.Append)) return;
+        Finish(FitOutcomeKind.WriteFailed, $"the samples of iteration {iteration} could not be written: {problem}");
+    }
+
+    /// <summary>A checkpoint write ended; <paramref name="problem"/> is null when it succeeded. A failed write stops the
+    /// run: the previous checkpoint is intact, and going on would only pile up work no checkpoint keeps.</summary>
     public void OnCheckpointWritten(long iteration, string? problem)
     {
         if (_finished || !_pending.Complete(PendingStep.Checkpoint)) return;
-        if (problem is null)
+        if (problem is not null)
         {
-            _checkpointIteration = iteration;
-            _lastCheckpoint = _time.GetTimestamp();
+            Finish(FitOutcomeKind.WriteFailed, $"the checkpoint of iteration {iteration} could not be written: {problem}");
+            return;
         }
-        else
-        {
-            _host.Warning($"checkpoint of iteration {iteration} failed ({problem}); the previous checkpoint (iteration {_checkpointIteration}) is intact");
-        }
+        _checkpointIteration = iteration;
+        _lastCheckpoint = _time.GetTimestamp();
         if (_pendingFinish is { } finish) { Finish(finish.Kind, finish.Message); return; }
         BeginIteration();
     }

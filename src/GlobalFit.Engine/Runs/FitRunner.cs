@@ -99,7 +99,7 @@ public static class FitRunner
         var finished = coordinator.Ask<FitFinished>(new StartFit(), Timeout.InfiniteTimeSpan).GetAwaiter().GetResult();
         system.Terminate().Wait(TimeSpan.FromSeconds(10));
         var outcome = finished.Outcome;
-        progress.WriteState(outcome.Kind.ToString().ToLowerInvariant(), outcome.IterationsCompleted, settings.Iterations, outcome.Message, outcome.CheckpointIteration);
+        progress.WriteState(outcome.Kind.StateName(), outcome.IterationsCompleted, settings.Iterations, outcome.Message, outcome.CheckpointIteration);
         return outcome.Kind == FitOutcomeKind.Completed
             ? outcome with { Catalogue = RunCatalogue.Export(plan, layout, options.Progress.Warning) }
             : outcome;

@@ -237,9 +237,9 @@ public sealed class SampleStore
             stream.Flush(flushToDisk: true);
             return committedLength + record.Length;
         }
-        catch (IOException e)
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            throw new InvalidInputException(path, null, $"cannot be appended to: {e.Message}", e);
+            throw new InvalidInputException(path, null, $"cannot be appended to: {FileProblem.Describe(path, e)}", e);
         }
     }
 

@@ -1,0 +1,102 @@
+using GlobalFit.Engine.Checkpoints;
+using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.Runs;
+using GlobalFit.Engine.Samples;
+using GlobalFit.Engine.Tests.Catalogue;
+
+namespace GlobalFit.Engine.Tests.Runs;
+
+/// <summary>A fit whose files cannot be written stops cleanly instead of waiting for ever, and a schedule stage that
+/// holds no worker is passed through. The write failures are made real by putting a folder where the file must go.</summary>
+public sealed class FitWriteFailureTests(SharedFitData data) : IClassFixture<SharedFitData>
+{
+    [Fact]
+    public void A_checkpoint_that_cannot_be_written_stops_the_run_and_keeps_the_previous_checkpoint()
+    {
+        using var folder = new TemporaryRunFolder();
+        string run = folder.File("run");
+        var progress = new Obstructing(2, () => Directory.CreateDirectory(Path.Combine(run, "checkpoint", "latest.tmp")));
+        var outcome = FitRunner.Start(NoiseOnlyConfig(folder, run), new FitRunOptions(progress, null, CancellationToken.None));
+
+        Assert.Equal(FitOutcomeKind.WriteFailed, outcome.Kind);
+        Assert.Equal(1, outcome.CheckpointIteration);
+        Assert.Contains("latest.tmp", outcome.Message, StringComparison.Ordinal);
+        Assert.Contains("is a folder", outcome.Message, StringComparison.Ordinal);
+        Assert.Equal(1, CheckpointFile.Read(run, _ => { }).Iteration); // the good checkpoint is intact
+        Assert.Contains("\"stopped (error)\"", File.ReadAllText(Path.Combine(run, "status.json")), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Samples_that_cannot_be_written_stop_the_run_naming_the_file()
+    {
+        using var folder = new TemporaryRunFolder();
+        string run = folder.File("run");
+        string samples = Path.Combine(run, SampleStore.ChainsFolderName, WorkerFileName.FromWorkerId("noise"));
+        var progress = new Obstructing(1, () =>
+        {
+            File.Delete(samples);
+            Directory.CreateDirectory(samples);
+        });
+        var outcome = FitRunner.Start(NoiseOnlyConfig(folder, run), new FitRunOptions(progress, null, CancellationToken.None));
+
+        Assert.Equal(FitOutcomeKind.WriteFailed, outcome.Kind);
+        Assert.Equal(1, outcome.IterationsCompleted);
+        Assert.Contains(samples, outcome.Message, StringComparison.Ordinal);
+        Assert.Contains("is a folder", outcome.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_band_of_exactly_one_window_leaves_the_odd_stage_empty_and_the_fit_still_completes()
+    {
+        using var folder = new TemporaryRunFolder();
+        string run = folder.File("run");
+        string config = folder.File("one-window.toml");
+        // The band is 101 bins at Δf = 1/(30 days), exactly one window of 101 bins, so the group of odd windows is empty.
+        File.WriteAllText(config, $"""
+            data = "{data.DataPath}"
+            run_folder = "{run}"
+            iterations = 2
+            [galactic_binaries]
+            f_min_hz = 2.97e-3
+            f_max_hz = 3.0086e-3
+            window_bins = 101
+            padding_bins = 16
+            steps_per_update = 20
+            temperatures = 2
+            fstat_cells_per_bin = 1
+            fstat_latitude_cells = 2
+            fstat_longitude_cells = 4
+            [noise]
+            steps_per_update = 5
+            """);
+        var plan = RunPlan.Load(config);
+        Assert.Contains(plan.Classes.SelectMany(c => c.Groups), g => g.Workers.IsEmpty);
+        var outcome = FitRunner.Start(config, new FitRunOptions(new CollectingProgress(), null, CancellationToken.None));
+        Assert.Equal(FitOutcomeKind.Completed, outcome.Kind);
+    }
+
+    private string NoiseOnlyConfig(TemporaryRunFolder folder, string run)
+    {
+        string config = folder.File("noise.toml");
+        File.WriteAllText(config, $"""
+            data = "{data.DataPath}"
+            run_folder = "{run}"
+            iterations = 4
+            checkpoint_every = 1
+            [noise]
+            steps_per_update = 5
+            """);
+        return config;
+    }
+
+    // Puts an obstacle in place when an iteration is reported, before the checkpoint of that iteration is written.
+    private sealed class Obstructing(long atIteration, Action obstruct) : IFitProgress
+    {
+        public void IterationCompleted(IterationReport report)
+        {
+            if (report.Iteration == atIteration) obstruct();
+        }
+
+        public void Warning(string message) { }
+    }
+}

@@ -6,7 +6,8 @@ public static class ExitCodes
     /// <summary>The command did what was asked.</summary>
     public const int Success = 0;
 
-    /// <summary>An unexpected internal error (a bug): the message and stack trace go to standard error.</summary>
+    /// <summary>An unexpected internal error (a bug): one line on standard error names it and the crash log that holds
+    /// the stack trace.</summary>
     public const int InternalError = 1;
 
     /// <summary>Bad input: an unreadable or invalid file, option or value. Nothing was written.</summary>

@@ -39,6 +39,7 @@ public sealed class StageMachine
     private long _checkpointIteration;
     private long _current;
     private int _stageIndex;
+    private bool _started;
     private bool _stopRequested;
     private bool _finished;
     private long _iterationStarted;
@@ -76,9 +77,10 @@ public sealed class StageMachine
     /// <summary>Whether the run is over (<see cref="IStageHost.Finished"/> was called).</summary>
     public bool IsFinished => _finished;
 
-    /// <summary>Loads every worker and starts the first iteration.</summary>
+    /// <summary>Loads every worker and starts the first iteration (or, when a stop was requested before, finishes).</summary>
     public void Start()
     {
+        _started = true;
         foreach (var (id, state) in _committed) _host.LoadWorker(id, state);
         BeginIteration();
     }
@@ -176,6 +178,7 @@ public sealed class StageMachine
     {
         if (_finished || _pendingFinish is not null) return;
         _stopRequested = true;
+        if (!_started) return; // a signal that came while the data were loading: the start finishes at once
         // Between iterations (appending or checkpointing) the flag is seen at the next iteration; mid-stage the stage is
         // abandoned, since the last complete iteration is already a consistent state.
         if (_pending.Step is PendingStep.Append or PendingStep.Checkpoint) return;

@@ -130,6 +130,17 @@ public sealed class StageMachineTests
     }
 
     [Fact]
+    public void A_stop_before_the_start_finishes_at_the_start_without_running_anything()
+    {
+        var machine = Machine(iterations: 5);
+        machine.OnStopRequested();
+        Assert.Null(_host.Outcome);
+        machine.Start();
+        Assert.Equal(FitOutcomeKind.Interrupted, _host.Outcome!.Kind);
+        Assert.Empty(_host.Updates);
+    }
+
+    [Fact]
     public void Checkpoints_follow_the_iteration_cadence_and_the_time_limit()
     {
         var machine = Machine(iterations: 10, checkpointEvery: 4, checkpointMinutes: 30);

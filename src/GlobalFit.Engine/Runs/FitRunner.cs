@@ -28,16 +28,29 @@ public static class FitRunner
         ArgumentNullException.ThrowIfNull(options);
         var plan = RunPlan.Load(configPath, options.Registry);
         var layout = new RunFolderLayout(plan.Settings.RunFolder);
-        if (File.Exists(layout.ResolvedConfig))
-            throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} holds another run; continue it with 'globalfit resume {layout.Root}' or choose another run_folder");
-        if (Directory.Exists(layout.Root) && Directory.EnumerateFileSystemEntries(layout.Root).Any())
-            throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} is not empty; choose a new or empty folder");
+        CheckRunFolderIsFree(configPath, layout);
+        // Everything that can be wrong with the data is found before the run folder is touched, so a refused fit leaves
+        // nothing behind that would block a retry.
+        var data = LoadData(plan, options.Progress);
+        bool unstarted = layout.HoldsUnstartedRun();
         Directory.CreateDirectory(layout.Root);
         using var runLock = RunLock.Acquire(layout);
+        if (unstarted) layout.ClearUnstartedRun();
         string resolved = plan.ResolvedToml();
         AtomicFile.Write(layout.ResolvedConfig, overwrite: false, s => s.Write(Encoding.UTF8.GetBytes(resolved)));
-        var data = LoadData(plan, options.Progress);
         return Run(plan, layout, Digest(resolved), data, FitPosition.Fresh(plan.Workers), options);
+    }
+
+    // A fresh fit needs a new or empty folder, or one whose earlier fit never completed an iteration (nothing to lose).
+    private static void CheckRunFolderIsFree(string configPath, RunFolderLayout layout)
+    {
+        if (File.Exists(layout.Root))
+            throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} is a file, not a folder");
+        if (!Directory.Exists(layout.Root) || layout.HoldsUnstartedRun()) return;
+        if (File.Exists(layout.ResolvedConfig))
+            throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} holds another run; continue it with 'globalfit resume {layout.Root}' or choose another run_folder");
+        if (Directory.EnumerateFileSystemEntries(layout.Root).Any())
+            throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} is not empty; choose a new or empty folder");
     }
 
     /// <summary>Continues a stopped fit from its newest intact checkpoint (or from the start when it never wrote one).</summary>

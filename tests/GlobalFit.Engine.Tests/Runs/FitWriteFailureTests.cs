@@ -75,6 +75,49 @@ public sealed class FitWriteFailureTests(SharedFitData data) : IClassFixture<Sha
         Assert.Equal(FitOutcomeKind.Completed, outcome.Kind);
     }
 
+    [Fact]
+    public void A_fit_refused_for_bad_data_leaves_no_run_behind_and_a_retry_with_good_data_starts()
+    {
+        using var folder = new TemporaryRunFolder();
+        string run = folder.File("run");
+        string bad = folder.File("bad.h5");
+        // Sixteen 0xFF bytes in the middle of the file (the channel data fill nearly all of it) hold at least one whole
+        // sample, which reads as NaN: the file's structure and summary are intact, only the full read finds the damage.
+        var bytes = File.ReadAllBytes(data.DataPath);
+        bytes.AsSpan(bytes.Length / 2, 16).Fill(0xFF);
+        File.WriteAllBytes(bad, bytes);
+        string config = folder.File("fit.toml");
+        File.WriteAllText(config, $"data = \"{bad}\"\nrun_folder = \"{run}\"\niterations = 1\n[noise]\nsteps_per_update = 5\n");
+        _ = RunPlan.Load(config); // the configuration and the file's summary pass: only the full read finds the damage
+        Assert.Throws<Physics.Files.InvalidInputException>(() => { FitRunner.Start(config, new FitRunOptions(new CollectingProgress(), null, CancellationToken.None)); });
+        Assert.False(File.Exists(Path.Combine(run, "run.toml")));
+
+        File.WriteAllText(config, $"data = \"{data.DataPath}\"\nrun_folder = \"{run}\"\niterations = 1\n[noise]\nsteps_per_update = 5\n");
+        Assert.Equal(FitOutcomeKind.Completed, FitRunner.Start(config, new FitRunOptions(new CollectingProgress(), null, CancellationToken.None)).Kind);
+    }
+
+    [Fact]
+    public void A_folder_whose_fit_never_completed_an_iteration_counts_as_empty()
+    {
+        using var folder = new TemporaryRunFolder();
+        string run = folder.File("run");
+        Directory.CreateDirectory(run);
+        File.WriteAllText(Path.Combine(run, "run.toml"), "# left by a fit that stopped before its first iteration\n");
+        File.WriteAllText(Path.Combine(run, "status.json"), "{}");
+        Assert.Equal(FitOutcomeKind.Completed, FitRunner.Start(NoiseOnlyConfig(folder, run), new FitRunOptions(new CollectingProgress(), null, CancellationToken.None)).Kind);
+    }
+
+    [Fact]
+    public void A_run_folder_that_is_a_file_is_refused_naming_the_key()
+    {
+        using var folder = new TemporaryRunFolder();
+        string run = folder.File("run");
+        File.WriteAllText(run, "");
+        var error = Assert.Throws<Physics.Files.InvalidInputException>(() => { FitRunner.Start(NoiseOnlyConfig(folder, run), new FitRunOptions(new CollectingProgress(), null, CancellationToken.None)); });
+        Assert.Contains("run_folder", error.Message, StringComparison.Ordinal);
+        Assert.Contains("is a file", error.Message, StringComparison.Ordinal);
+    }
+
     private string NoiseOnlyConfig(TemporaryRunFolder folder, string run)
     {
         string config = folder.File("noise.toml");

@@ -71,10 +71,13 @@ public static class FitRunner
         var store = new SampleStore(layout.Root);
         if (CheckpointFile.Exists(layout.Root))
         {
-            var checkpoint = CheckpointFile.Read(layout.Root, options.Progress.Warning);
-            if (checkpoint.ConfigDigest != digest)
-                throw new InvalidInputException(layout.ResolvedConfig, null, "run.toml was edited after the checkpoint was written; restore it or start a new fit");
-            start = FitPosition.From(checkpoint);
+            start = FitPosition.From(CheckpointFile.Read(layout.Root, options.Progress.Warning, digest));
+            // Samples of iterations up to the checkpoint must all be in the store: resuming past a gap would leave it
+            // out of the catalogue without a word.
+            long committed = store.CommittedIteration;
+            if (committed < start.Iteration)
+                throw new InvalidInputException(store.ChainsFolder, null,
+                    $"holds the samples of iterations 1…{committed} only, but the checkpoint is at iteration {start.Iteration}: the samples of iterations {committed + 1}…{start.Iteration} are lost");
         }
         else
         {

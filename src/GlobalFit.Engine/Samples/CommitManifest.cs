@@ -18,11 +18,18 @@ internal sealed record CommitManifest(long Iteration, IReadOnlyDictionary<string
 
     public long LengthOf(string fileName) => Lengths.TryGetValue(fileName, out long length) ? length : 0;
 
-    /// <summary>Reads the manifest of <paramref name="chainsFolder"/>; no file means nothing was committed yet.</summary>
+    /// <summary>Reads the manifest of <paramref name="chainsFolder"/>; no file means nothing was committed yet, unless
+    /// sample files hold data, in which case the record was lost and the store cannot tell what was committed.</summary>
+    /// <exception cref="InvalidInputException">The record is missing beside non-empty sample files, or is malformed.</exception>
     public static CommitManifest Load(string chainsFolder)
     {
         string path = Path.Combine(chainsFolder, FileName);
-        if (!File.Exists(path)) return Empty;
+        if (!File.Exists(path))
+        {
+            if (Directory.Exists(chainsFolder) && Directory.EnumerateFiles(chainsFolder, "*" + WorkerFileName.Extension).Any(f => new FileInfo(f).Length > 0))
+                throw new InvalidInputException(path, null, "is missing, but sample files beside it hold data: which samples were committed cannot be told, so none are read");
+            return Empty;
+        }
         string[] lines = File.ReadAllLines(path, Encoding.UTF8);
         if (lines.Length < 2 || lines[0] != FirstLine)
             throw new InvalidInputException(path, "line 1", $"is not a chain commit file (expected the first line '{FirstLine}')");

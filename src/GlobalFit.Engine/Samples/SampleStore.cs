@@ -50,7 +50,13 @@ public sealed class SampleStore
         if (!Directory.Exists(RunFolder)) throw new InvalidInputException(RunFolder, null, "run folder does not exist");
         var manifest = CommitManifest.Load(ChainsFolder);
         long iteration = CheckIteration(blocks, manifest.Iteration);
-        Directory.CreateDirectory(ChainsFolder);
+        if (!Directory.Exists(ChainsFolder))
+        {
+            // The commit record exists before any sample file does, so a record missing beside sample files is a loss
+            // (reported by every reader), never the state of a store that has not committed yet.
+            Directory.CreateDirectory(ChainsFolder);
+            CommitManifest.Empty.Save(ChainsFolder);
+        }
 
         var lengths = new Dictionary<string, long>(manifest.Lengths, StringComparer.Ordinal);
         foreach (var block in blocks.OrderBy(b => b.WorkerId, StringComparer.Ordinal))

@@ -6,9 +6,10 @@ using GlobalFit.Engine.Tests.Catalogue;
 
 namespace GlobalFit.Engine.Tests.Runs;
 
-/// <summary>A fit whose files cannot be written stops cleanly instead of waiting for ever, and a schedule stage that
-/// holds no worker is passed through. The write failures are made real by putting a folder where the file must go.</summary>
-public sealed class FitWriteFailureTests(SharedFitData data) : IClassFixture<SharedFitData>
+/// <summary>A fit that never hangs, never leaves a half-made run and never loses samples quietly: failed writes stop it
+/// cleanly (made real by putting a folder where a file must go), an empty schedule stage is passed through, bad data is
+/// found before the run folder is touched, and a resume refuses lost samples and another run's checkpoint.</summary>
+public sealed class FitReliabilityTests(SharedFitData data) : IClassFixture<SharedFitData>
 {
     [Fact]
     public void A_checkpoint_that_cannot_be_written_stops_the_run_and_keeps_the_previous_checkpoint()
@@ -118,6 +119,36 @@ public sealed class FitWriteFailureTests(SharedFitData data) : IClassFixture<Sha
         Assert.Contains("is a file", error.Message, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void A_resume_whose_samples_stop_short_of_the_checkpoint_is_refused_instead_of_losing_them()
+    {
+        using var folder = new TemporaryRunFolder();
+        string run = folder.File("run");
+        using var stop = new CancellationTokenSource();
+        FitRunner.Start(NoiseOnlyConfig(folder, run), new FitRunOptions(new StopAt(2, stop), null, stop.Token));
+        Assert.Equal(2, CheckpointFile.Read(run, _ => { }).Iteration);
+        new SampleStore(run).TruncateAfter(1); // the samples of iteration 2 are gone, its checkpoint is not
+        var error = Assert.Throws<Physics.Files.InvalidInputException>(() => { FitRunner.Resume(run, new FitRunOptions(new CollectingProgress(), null, CancellationToken.None)); });
+        Assert.Contains("iterations 2…2 are lost", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_latest_checkpoint_of_another_run_is_reported_and_the_previous_one_is_used()
+    {
+        using var folder = new TemporaryRunFolder();
+        string run = folder.File("run"), other = folder.File("other");
+        using (var stop = new CancellationTokenSource())
+            FitRunner.Start(NoiseOnlyConfig(folder, run), new FitRunOptions(new StopAt(2, stop), null, stop.Token));
+        File.WriteAllText(folder.File("other.toml"), $"data = \"{data.DataPath}\"\nrun_folder = \"{other}\"\niterations = 2\nseed = 17\ncheckpoint_every = 1\n[noise]\nsteps_per_update = 5\n");
+        FitRunner.Start(folder.File("other.toml"), new FitRunOptions(new CollectingProgress(), null, CancellationToken.None));
+        File.Copy(CheckpointFile.LatestPath(other), CheckpointFile.LatestPath(run), overwrite: true);
+
+        var progress = new CollectingProgress();
+        var outcome = FitRunner.Resume(run, new FitRunOptions(progress, null, CancellationToken.None));
+        Assert.Equal(FitOutcomeKind.Completed, outcome.Kind);
+        Assert.Contains(progress.Warnings, w => w.Contains("belongs to another run", StringComparison.Ordinal));
+    }
+
     private string NoiseOnlyConfig(TemporaryRunFolder folder, string run)
     {
         string config = folder.File("noise.toml");
@@ -130,6 +161,17 @@ public sealed class FitWriteFailureTests(SharedFitData data) : IClassFixture<Sha
             steps_per_update = 5
             """);
         return config;
+    }
+
+    // Requests a stop once an iteration is reported.
+    private sealed class StopAt(long iteration, CancellationTokenSource stop) : IFitProgress
+    {
+        public void IterationCompleted(IterationReport report)
+        {
+            if (report.Iteration == iteration) stop.Cancel();
+        }
+
+        public void Warning(string message) { }
     }
 
     // Puts an obstacle in place when an iteration is reported, before the checkpoint of that iteration is written.

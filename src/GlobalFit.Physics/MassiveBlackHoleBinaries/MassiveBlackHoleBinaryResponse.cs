@@ -19,7 +19,9 @@ namespace GlobalFit.Physics.MassiveBlackHoleBinaries;
 /// <c>h× ∝ 2 cos ι sin Φ</c>). Michelson TDI with equal constant arms (<c>z = e^{−2πifL}</c>, L the nominal arm):
 /// <c>X̃ = (1 − z²)(r̃12 − r̃13)</c> with <c>r̃ij = ỹij + z ỹji</c>, Y, Z cyclic, and A, E, T as in
 /// <see cref="Series.TdiCombination"/>. No long-wavelength approximation is made.</para>
-/// <para>Errors: the orbit is frozen over the light time (~1e-4 of L in position) and the response is taken at the single time
+/// <para>Errors: all arms are taken at the nominal length L in the link factors as in the TDI delays (exact for
+/// <see cref="RigidOrbits"/>; for flexing orbits a ~1 % arm change shifts a link phase by πfΔL, ~0.01 rad at 40 mHz). The orbit is
+/// frozen over the light time (~1e-4 of L in position) and the response is taken at the single time
 /// t(f); the next-order terms (Marsat &amp; Baker 2018) matter only for slowly chirping signals. Tests compare with the slow
 /// time-domain reference (<see cref="SlowReferenceResponse"/>).</para>
 /// <para>Immutable and thread-safe when the orbits are.</para>
@@ -30,12 +32,14 @@ public sealed class MassiveBlackHoleBinaryResponse
     private static readonly double InvSqrt2 = 1.0 / Math.Sqrt(2.0);
     private static readonly double InvSqrt6 = 1.0 / Math.Sqrt(6.0);
     private static readonly double InvSqrt3 = 1.0 / Math.Sqrt(3.0);
+    private readonly ConstellationSnapshot _snapshot;
 
     /// <summary>Response of the constellation <paramref name="orbits"/>.</summary>
     public MassiveBlackHoleBinaryResponse(IConstellationOrbits orbits)
     {
         ArgumentNullException.ThrowIfNull(orbits);
         Orbits = orbits;
+        _snapshot = new ConstellationSnapshot(orbits);
         ArmLightTimeS = orbits.ArmLengthM / PhysicalConstants.SpeedOfLightMS;
     }
 
@@ -82,19 +86,31 @@ public sealed class MassiveBlackHoleBinaryResponse
         for (int i = 0; i < n; i++)
         {
             double f = frequenciesHz[i];
-            double time = timesS[i];
-            var x1 = invC * Orbits.Position(1, time);
-            var x2 = invC * Orbits.Position(2, time);
-            var x3 = invC * Orbits.Position(3, time);
-            double k1 = k.Dot(x1), k2 = k.Dot(x2), k3 = k.Dot(x3);
+            _snapshot.Positions(timesS[i], out var p1, out var p2, out var p3);
+            var x1 = invC * p1;
+            var x2 = invC * p2;
+            var x3 = invC * p3;
+            double piF = Math.PI * f;
+            // e^{−iπf k·x_p} per spacecraft: each link's phase e^{−iπf(L + k·(x_p + x_q))} is a product of two of them and
+            // e^{−iπfL} (the arms are taken at their actual lengths inside the sinc and the nominal one in the phase factor
+            // below only through z).
+            var (s1, c1) = Math.SinCos(-piF * k.Dot(x1));
+            var (s2, c2) = Math.SinCos(-piF * k.Dot(x2));
+            var (s3, c3) = Math.SinCos(-piF * k.Dot(x3));
+            var e1 = new Complex(c1, s1);
+            var e2 = new Complex(c2, s2);
+            var e3 = new Complex(c3, s3);
+            // πfL with the nominal arm serves the link phases, the sincs and the TDI delay z = e^{−2πifL}.
+            double piFL = piF * armTime;
+            var (sinArm, cosArm) = Math.SinCos(piFL);
+            var halfDelay = new Complex(cosArm, -sinArm);          // e^{−iπfL}
 
             // Links along the three arms; each arm serves both directions (n flips sign, the pattern does not).
-            Link(f, x1, x2, k1, k2, k, basis, kPlus, kCross, out var y12, out var y21);
-            Link(f, x2, x3, k2, k3, k, basis, kPlus, kCross, out var y23, out var y32);
-            Link(f, x3, x1, k3, k1, k, basis, kPlus, kCross, out var y31, out var y13);
+            Link(piFL, sinArm, cosArm, x1, x2, halfDelay * e1 * e2, k, basis, kPlus, kCross, out var y12, out var y21);
+            Link(piFL, sinArm, cosArm, x2, x3, halfDelay * e2 * e3, k, basis, kPlus, kCross, out var y23, out var y32);
+            Link(piFL, sinArm, cosArm, x3, x1, halfDelay * e3 * e1, k, basis, kPlus, kCross, out var y31, out var y13);
 
-            var (sz, cz) = Math.SinCos(-2.0 * Math.PI * f * armTime);
-            var z = new Complex(cz, sz);
+            var z = halfDelay * halfDelay;
             var oneMinusZ2 = 1.0 - z * z;
             var x = oneMinusZ2 * (y12 + z * y21 - y13 - z * y31);
             var y = oneMinusZ2 * (y23 + z * y32 - y21 - z * y12);
@@ -114,21 +130,33 @@ public sealed class MassiveBlackHoleBinaryResponse
     }
 
     /// <summary>The two one-way links along the arm between spacecraft <c>p</c> and <c>q</c>: y_pq (received at p) and y_qp.</summary>
-    private static void Link(double f, Vector3D xp, Vector3D xq, double kp, double kq, Vector3D k, PolarisationBasis basis,
-        Complex kPlus, Complex kCross, out Complex ypq, out Complex yqp)
+    /// <param name="piFL">πfL with the nominal arm L.</param>
+    /// <param name="sinArm">sin(πfL).</param>
+    /// <param name="cosArm">cos(πfL).</param>
+    /// <param name="xp">Position of p in light-seconds.</param>
+    /// <param name="xq">Position of q in light-seconds.</param>
+    /// <param name="phase"><c>e^{−iπf(L + k·(x_p + x_q))}</c>.</param>
+    /// <param name="k">Propagation direction.</param>
+    /// <param name="basis">Polarisation frame.</param>
+    /// <param name="kPlus">K+.</param>
+    /// <param name="kCross">K×.</param>
+    /// <param name="ypq">ỹ_pq per unit h̃22.</param>
+    /// <param name="yqp">ỹ_qp per unit h̃22.</param>
+    private static void Link(double piFL, double sinArm, double cosArm, Vector3D xp, Vector3D xq, Complex phase, Vector3D k,
+        PolarisationBasis basis, Complex kPlus, Complex kCross, out Complex ypq, out Complex yqp)
     {
         var d = xp - xq;
-        double length = d.Length;
-        var nHat = d / length;                  // from q to p
+        var nHat = d / d.Length;                // from q to p
         var (patternPlus, patternCross) = basis.LinkPattern(nHat);
         var pattern = kPlus * patternPlus + kCross * patternCross;
         double kn = k.Dot(nHat);
-        double piFL = Math.PI * f * length;
-        var (sm, cm) = Math.SinCos(-Math.PI * f * (length + kp + kq));
-        var common = new Complex(cm, sm) * pattern * new Complex(0.0, -piFL);
-        ypq = common * Sinc(piFL * (1.0 - kn));
-        yqp = common * Sinc(piFL * (1.0 + kn));
+        // sin(πfL(1 ∓ k·n)) from the sines and cosines of πfL and πfL k·n.
+        var (sinB, cosB) = Math.SinCos(piFL * kn);
+        var common = phase * pattern * new Complex(0.0, -piFL);
+        ypq = common * SincFromSine(sinArm * cosB - cosArm * sinB, piFL * (1.0 - kn));
+        yqp = common * SincFromSine(sinArm * cosB + cosArm * sinB, piFL * (1.0 + kn));
     }
 
-    private static double Sinc(double x) => Math.Abs(x) < 1e-6 ? 1.0 - x * x / 6.0 : Math.Sin(x) / x;
+    /// <summary>sin(x)/x given sin(x); the limit 1 − x²/6 where x is tiny (and sin(x)/x loses digits).</summary>
+    private static double SincFromSine(double sine, double x) => Math.Abs(x) < 1e-4 ? 1.0 - x * x / 6.0 : sine / x;
 }

@@ -102,3 +102,23 @@ public sealed class HeterodynedLikelihoodTests(LoudBinaryScenario scenario, ITes
         return (full, watch.Elapsed.TotalMicroseconds / 2000);
     }
 }
+
+public sealed class OptimalSnrTests(LoudBinaryScenario scenario) : IClassFixture<LoudBinaryScenario>
+{
+    [Fact]
+    public void Optimal_snr_is_the_injected_value_and_scales_inversely_with_distance()
+    {
+        // The scenario scales the distance to SNR 1000 with the same weights; the amplitude is ∝ 1/D_L (PhenomDWaveform).
+        Assert.Equal(LoudBinaryScenario.TargetSnr, scenario.Full.OptimalSnr(scenario.Truth), 1e-6 * LoudBinaryScenario.TargetSnr);
+        var farther = scenario.Truth with { DistanceMpc = 4 * scenario.Truth.DistanceMpc };
+        Assert.Equal(LoudBinaryScenario.TargetSnr / 4, scenario.Full.OptimalSnr(farther), 1e-6 * LoudBinaryScenario.TargetSnr);
+    }
+
+    [Fact]
+    public void Log_likelihood_of_the_true_source_is_half_the_squared_snr_plus_the_noise_term()
+    {
+        // ln Λ(h) = (n|h) + ½(h|h) for d = h + n, and (n|h) ~ N(0, SNR²): within 5 SNR (false-failure rate ~6e-7) of ½ SNR².
+        double value = scenario.Full.LogLikelihoodRatio(scenario.Truth);
+        Assert.InRange(value, 0.5e6 - 5 * 1000, 0.5e6 + 5 * 1000);
+    }
+}

@@ -11,7 +11,7 @@ namespace GlobalFit.Physics.MassiveBlackHoleBinaries;
 /// <c>h̃(f) = ∫ h(t) e^{−2πift} dt</c>). The time at which frequency f is emitted (stationary phase, arriving at the Sun) is
 /// <c>t(f) = (1/2π) dΨ/df = t_c + M_s (1/2π) dφ/d(Mf)</c>, so <c>t(f_peak) = t_c</c>: the coalescence time is the arrival of the
 /// amplitude peak at the Sun. Polarisations and the reference phase are applied by the response
-/// (the response type of this folder). Immutable value; thread-safe.</para>
+/// (<see cref="MassiveBlackHoleBinaryResponse"/>). Immutable value; thread-safe.</para>
 /// </remarks>
 public readonly struct PhenomDWaveform
 {

@@ -64,7 +64,17 @@ public sealed class MassiveBlackHoleBinaryTemplateGenerator
     /// <summary>Writes A, E and T (T may be empty) at the positive <paramref name="frequenciesHz"/> into the caller's spans.</summary>
     /// <exception cref="ArgumentException">Lengths differ or exceed <see cref="Capacity"/>.</exception>
     /// <exception cref="ArgumentOutOfRangeException">A parameter is out of the waveform's range or a frequency is not positive.</exception>
-    public void Render(in MassiveBlackHoleBinaryParameters source, ReadOnlySpan<double> frequenciesHz, Span<Complex> a, Span<Complex> e, Span<Complex> t)
+    public void Render(in MassiveBlackHoleBinaryParameters source, ReadOnlySpan<double> frequenciesHz, Span<Complex> a, Span<Complex> e, Span<Complex> t) =>
+        RenderCore(source, frequenciesHz, a, e, t, accumulate: false);
+
+    /// <summary>Adds A, E and T (T may be empty) on the uniform bins of <paramref name="window"/> into the caller's spans (bin k at
+    /// <c>k Δf</c>; bin 0 receives nothing): the form the engine's residual bookkeeping uses.</summary>
+    /// <exception cref="ArgumentException">Lengths differ from the window's count or exceed <see cref="Capacity"/>.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The spacing is not positive or a parameter is out of range.</exception>
+    public void AddResponse(in MassiveBlackHoleBinaryParameters source, BinWindow window, double dfHz, Span<Complex> a, Span<Complex> e, Span<Complex> t) =>
+        RenderBinsCore(source, window, dfHz, a, e, t, accumulate: true);
+
+    private void RenderCore(in MassiveBlackHoleBinaryParameters source, ReadOnlySpan<double> frequenciesHz, Span<Complex> a, Span<Complex> e, Span<Complex> t, bool accumulate)
     {
         int n = frequenciesHz.Length;
         if (n > Capacity)
@@ -86,9 +96,18 @@ public sealed class MassiveBlackHoleBinaryTemplateGenerator
             Complex h = amplitude[i] == 0.0 || time[i] < EarliestTimeS
                 ? Complex.Zero
                 : Complex.FromPolarCoordinates(amplitude[i], -phase[i]);
-            a[i] = transferA[i] * h;
-            e[i] = transferE[i] * h;
-            if (!t.IsEmpty) t[i] = transferT[i] * h;
+            if (accumulate)
+            {
+                a[i] += transferA[i] * h;
+                e[i] += transferE[i] * h;
+                if (!t.IsEmpty) t[i] += transferT[i] * h;
+            }
+            else
+            {
+                a[i] = transferA[i] * h;
+                e[i] = transferE[i] * h;
+                if (!t.IsEmpty) t[i] = transferT[i] * h;
+            }
         }
     }
 
@@ -96,7 +115,10 @@ public sealed class MassiveBlackHoleBinaryTemplateGenerator
     /// Bin 0 (zero frequency) is set to zero.</summary>
     /// <exception cref="ArgumentException">Lengths differ from the window's count or exceed <see cref="Capacity"/>.</exception>
     /// <exception cref="ArgumentOutOfRangeException">The spacing is not positive or a parameter is out of range.</exception>
-    public void RenderBins(in MassiveBlackHoleBinaryParameters source, BinWindow window, double dfHz, Span<Complex> a, Span<Complex> e, Span<Complex> t)
+    public void RenderBins(in MassiveBlackHoleBinaryParameters source, BinWindow window, double dfHz, Span<Complex> a, Span<Complex> e, Span<Complex> t) =>
+        RenderBinsCore(source, window, dfHz, a, e, t, accumulate: false);
+
+    private void RenderBinsCore(in MassiveBlackHoleBinaryParameters source, BinWindow window, double dfHz, Span<Complex> a, Span<Complex> e, Span<Complex> t, bool accumulate)
     {
         if (!(dfHz > 0) || !double.IsFinite(dfHz))
             throw new ArgumentOutOfRangeException(nameof(dfHz), dfHz, "bin spacing must be positive and finite");
@@ -108,12 +130,12 @@ public sealed class MassiveBlackHoleBinaryTemplateGenerator
             throw new ArgumentException("output spans must match the window (T may be empty)");
         var frequencies = _frequencies.AsSpan(0, n);
         for (int i = 0; i < n; i++) frequencies[i] = (window.First + skip + i) * dfHz;
-        if (skip == 1)
+        if (skip == 1 && !accumulate)
         {
             a[0] = e[0] = Complex.Zero;
             if (!t.IsEmpty) t[0] = Complex.Zero;
         }
-        Render(source, frequencies, a[skip..], e[skip..], t.IsEmpty ? t : t[skip..]);
+        RenderCore(source, frequencies, a[skip..], e[skip..], t.IsEmpty ? t : t[skip..], accumulate);
     }
 
     /// <summary>The waveform of <paramref name="source"/> (total mass from chirp mass and mass ratio).</summary>

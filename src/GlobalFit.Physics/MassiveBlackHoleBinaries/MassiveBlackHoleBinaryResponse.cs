@@ -92,8 +92,7 @@ public sealed class MassiveBlackHoleBinaryResponse
             var x3 = invC * p3;
             double piF = Math.PI * f;
             // e^{−iπf k·x_p} per spacecraft: each link's phase e^{−iπf(L + k·(x_p + x_q))} is a product of two of them and
-            // e^{−iπfL} (the arms are taken at their actual lengths inside the sinc and the nominal one in the phase factor
-            // below only through z).
+            // e^{−iπfL}.
             var (s1, c1) = Math.SinCos(-piF * k.Dot(x1));
             var (s2, c2) = Math.SinCos(-piF * k.Dot(x2));
             var (s3, c3) = Math.SinCos(-piF * k.Dot(x3));

@@ -90,6 +90,18 @@ public readonly record struct MassiveBlackHoleBinaryParameters(
     /// <summary>Symmetric mass ratio <c>η = q/(1 + q)²</c>.</summary>
     public double SymmetricMassRatio => BinaryMasses.SymmetricMassRatio(MassRatio);
 
+    /// <summary>Redshift of the luminosity distance (derived column <c>redshift</c>) in <paramref name="cosmology"/>, by default
+    /// <see cref="Cosmology.FlatLambdaCdm.Planck2018"/>.</summary>
+    /// <exception cref="ArgumentOutOfRangeException">The distance is negative, not finite or beyond the cosmology's range.</exception>
+    public double Redshift(Cosmology.FlatLambdaCdm? cosmology = null) =>
+        (cosmology ?? Cosmology.FlatLambdaCdm.Planck2018).Redshift(DistanceMpc);
+
+    /// <summary>Source-frame total mass <c>M/(1 + z)</c> with z from <see cref="Redshift"/>.</summary>
+    /// <value>Solar masses.</value>
+    /// <exception cref="ArgumentOutOfRangeException">A mass, q or the distance is out of range.</exception>
+    public double SourceFrameTotalMassMsun(Cosmology.FlatLambdaCdm? cosmology = null) =>
+        BinaryMasses.SourceFrame(TotalMassMsun, Redshift(cosmology));
+
     /// <summary>The parameters as an array in the order of <see cref="ColumnNames"/>.</summary>
     public double[] ToArray() =>
     [

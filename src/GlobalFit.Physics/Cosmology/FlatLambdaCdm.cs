@@ -45,7 +45,7 @@ public sealed class FlatLambdaCdm
         HubbleDistanceMpc = PhysicalConstants.SpeedOfLightMS / 1000.0 / hubbleConstantKmSMpc;
     }
 
-    /// <summary>Planck 2018 cosmology: H0 = 67.36 km/s/Mpc, Ω_m = 0.3153 (Planck Collaboration 2020, A&amp;A 641, A6,
+    /// <summary>The cosmology of the 2018 Planck release: H0 = 67.36 km/s/Mpc, Ω_m = 0.3153 (Aghanim et al. 2020, A&amp;A 641, A6,
     /// Table 2, column TT,TE,EE+lowE+lensing; from memory).</summary>
     public static FlatLambdaCdm Planck2018 { get; } = new(67.36, 0.3153);
 

@@ -12,7 +12,7 @@ namespace GlobalFit.Physics.MassiveBlackHoleBinaries;
 /// <item><c>tc_s</c>: uniform on [<see cref="EarliestCoalescenceS"/>, <see cref="LatestCoalescenceS"/>] (no default: the caller
 /// gives the data span or a window around a trigger);</item>
 /// <item><c>distance_mpc</c>: uniform in Euclidean volume, density ∝ D² on [<see cref="MinimumDistanceMpc"/>,
-/// <see cref="MaximumDistanceMpc"/>] (default 10 … 3e5 Mpc, beyond z = 20 for Planck 2018);</item>
+/// <see cref="MaximumDistanceMpc"/>] (default 10 … 3e5 Mpc, beyond z = 20 for the 2018 Planck parameters);</item>
 /// <item>sky isotropic: <c>sin beta_rad</c> uniform on [−1, 1], <c>lambda_rad</c> uniform on [0, 2π);</item>
 /// <item><c>cos iota_rad</c> uniform on [−1, 1]; <c>psi_rad</c> uniform on [0, π); <c>phi_ref_rad</c> uniform on [0, 2π).</item>
 /// </list>

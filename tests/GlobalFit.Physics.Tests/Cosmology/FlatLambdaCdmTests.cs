@@ -51,8 +51,8 @@ public sealed class FlatLambdaCdmTests
     [Fact]
     public void Planck_luminosity_distance_at_redshift_one_is_about_6_8_gpc()
     {
-        // Common practice figure: D_L(z = 1) ≈ 6.8 Gpc for Planck 2018 parameters (derived: trapezoid sum as above gives
-        // 6805.4 Mpc). 0.5 % covers the spread among the Planck 2018 parameter columns.
+        // Common practice figure: D_L(z = 1) ≈ 6.8 Gpc for the 2018 Planck parameters (derived: trapezoid sum as above gives
+        // 6805.4 Mpc). 0.5 % covers the spread among the parameter columns of the 2018 Planck release.
         Assert.Equal(6805.4, FlatLambdaCdm.Planck2018.LuminosityDistanceMpc(1.0), 35.0);
     }
 

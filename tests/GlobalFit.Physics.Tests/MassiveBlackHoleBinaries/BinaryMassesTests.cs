@@ -37,7 +37,7 @@ public sealed class BinaryMassesTests
     [Fact]
     public void Source_frame_total_mass_uses_the_redshift_of_the_distance()
     {
-        // D_L of z = 1 in the Planck 2018 cosmology, so the source-frame mass is half the detector-frame one.
+        // D_L of z = 1 in the cosmology of the 2018 Planck release, so the source-frame mass is half the detector-frame one.
         double distance = GlobalFit.Physics.Cosmology.FlatLambdaCdm.Planck2018.LuminosityDistanceMpc(1.0);
         var p = new MassiveBlackHoleBinaryParameters(4e5, 2, 0, 0, 0, distance, 0, 0, 0, 0, 0);
         Assert.Equal(1.0, p.Redshift(), 1e-9);

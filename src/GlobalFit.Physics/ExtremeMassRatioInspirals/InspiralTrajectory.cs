@@ -107,7 +107,8 @@ public sealed class InspiralTrajectory
             throw new InvalidOperationException($"orbital integration ended with {outcome} at t = {EndSeconds} s");
     }
 
-    /// <summary>Interpolated state at <paramref name="timeSeconds"/>, clamped to the stored span.</summary>
+    /// <summary>Interpolated state at <paramref name="timeSeconds"/>; outside the stored span the first or last cubic is
+    /// extrapolated (meant for the few hundred seconds of the barycentric delay, not for long stretches).</summary>
     /// <param name="timeSeconds">Time on the data axis.</param>
     /// <param name="state">Output [Φ, ν, γ̃, e, α].</param>
     /// <param name="rates">Optional output of the interpolant's derivative (empty to skip).</param>
@@ -119,7 +120,7 @@ public sealed class InspiralTrajectory
     {
         if (Count < 2) throw new InvalidOperationException("the trajectory has not been evolved");
         int j = Locate(timeSeconds, hint);
-        double t = Math.Clamp(timeSeconds, _times[0], _times[Count - 1]);
+        double t = timeSeconds;
         double t0 = _times[j], t1 = _times[j + 1];
         int a = j * N, b = a + N;
         for (int i = 0; i < N; i++)

@@ -1,6 +1,7 @@
 using System.Numerics;
 using GlobalFit.Physics.Constants;
 using GlobalFit.Physics.Detector;
+using GlobalFit.Physics.Numerics;
 using GlobalFit.Physics.Series;
 
 namespace GlobalFit.Physics.ExtremeMassRatioInspirals;
@@ -321,12 +322,14 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
         int q = v * Sidebands + k + 2;
         long evaluations = 0;
         int maxBin = BinCount - 1;
+        double begin = _tau[0], end = _tau[nodes - 1];
         for (int j = 0; j + 1 < nodes; j++)
         {
             double h = _tau[j + 1] - _tau[j];
             if (!(h > 0)) continue;
             // Phase derivatives at both nodes, in detector time (Doppler through the delay's rates).
             double psi0 = n * _phi[j] + 2 * s * _gamma[j] + k * _alpha[j];
+            double psi1 = n * _phi[j + 1] + 2 * s * _gamma[j + 1] + k * _alpha[j + 1];
             double rate0 = n * _phiRate[j] + 2 * s * _gammaRate[j] + k * _alphaRate[j];
             double rate1 = n * _phiRate[j + 1] + 2 * s * _gammaRate[j + 1] + k * _alphaRate[j + 1];
             double acc0 = n * _phiAcc[j] + 2 * s * _gammaAcc[j] + k * _alphaAcc[j];
@@ -339,19 +342,7 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
             double sign = f0 > 0 ? 1 : -1;
             // Work with the positive-frequency branch: flip Ψ, F and Ḟ (and conjugate W) when F < 0.
             f0 *= sign; f1 *= sign; fd0 *= sign; fd1 *= sign;
-            psi0 *= sign;
-            // F(u) = c0 + c1 u + c2 u² + c3 u³ on u = (τ − τ_j)/h ∈ [0, 1].
-            double c0 = f0, c1 = h * fd0, c2 = 3 * (f1 - f0) - 2 * h * fd0 - h * fd1, c3 = 2 * (f0 - f1) + h * fd0 + h * fd1;
-            double fLow = Math.Min(f0, f1), fHigh = Math.Max(f0, f1);
-            int kFirst = Math.Max((int)Math.Ceiling(fLow / df), Math.Max(window.First, 1));
-            int kLast = Math.Min((int)Math.Floor(fHigh / df), Math.Min(window.End - 1, maxBin));
-            int spanFirst = Math.Max((int)Math.Ceiling(fLow / df), 1), spanLast = Math.Min((int)Math.Floor(fHigh / df), maxBin);
-            if (spanLast >= spanFirst)
-            {
-                lowest = Math.Min(lowest, spanFirst);
-                highest = Math.Max(highest, spanLast);
-            }
-            if (kLast < kFirst) continue;
+            psi0 *= sign; psi1 *= sign;
             Complex w0A = Amplitude(j, n, v, q, 0), w1A = Amplitude(j + 1, n, v, q, 0);
             Complex w0E = Amplitude(j, n, v, q, 1), w1E = Amplitude(j + 1, n, v, q, 1);
             if (sign < 0)
@@ -359,8 +350,14 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
                 w0A = Complex.Conjugate(w0A); w1A = Complex.Conjugate(w1A);
                 w0E = Complex.Conjugate(w0E); w1E = Complex.Conjugate(w1E);
             }
-            double phaseSign = fd0 > 0 ? Math.PI / 4 : -Math.PI / 4;
-            double u = (kFirst * df - f0) / (f1 - f0);
+            var frame = new Truncation(begin, end, fd0 > 0);
+            // F(u) = c0 + c1 u + c2 u² + c3 u³ on u = (τ − τ_j)/h ∈ [0, 1].
+            double c0 = f0, c1 = h * fd0, c2 = 3 * (f1 - f0) - 2 * h * fd0 - h * fd1, c3 = 2 * (f0 - f1) + h * fd0 + h * fd1;
+            double fLow = Math.Min(f0, f1), fHigh = Math.Max(f0, f1);
+            Track(fLow, fHigh, df, maxBin, ref lowest, ref highest);
+            int kFirst = Math.Max((int)Math.Ceiling(fLow / df), Math.Max(window.First, 1));
+            int kLast = Math.Min((int)Math.Floor(fHigh / df), Math.Min(window.End - 1, maxBin));
+            double u = kFirst <= kLast ? (kFirst * df - f0) / (f1 - f0) : 0;
             for (int bin = kFirst; bin <= kLast; bin++)
             {
                 double f = bin * df;
@@ -379,17 +376,83 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
                 if (!(fDot * fd0 > 0)) continue;
                 double tStar = _tau[j] + u * h;
                 double psi = psi0 + 2 * Math.PI * h * u * (c0 + u * (c1 / 2 + u * (c2 / 3 + u * c3 / 4)));
-                double phase = psi - 2 * Math.PI * f * tStar + phaseSign;
-                var (sinPhase, cosPhase) = Math.SinCos(phase);
-                double magnitude = 0.5 / Math.Sqrt(Math.Abs(fDot));
-                var rotation = _response.Transfer(f) * new Complex(magnitude * cosPhase, magnitude * sinPhase);
-                int o = bin - window.First;
-                a[o] += ((1 - u) * w0A + u * w1A) * rotation;
-                e[o] += ((1 - u) * w0E + u * w1E) * rotation;
+                Emit(bin, f, tStar, psi, fDot, (1 - u) * w0A + u * w1A, (1 - u) * w0E + u * w1E, frame, window, a, e);
                 evaluations++;
             }
+            // Beyond the record's first and last node, the truncated stationary-phase integral still reaches the bins
+            // just outside the sideband's frequency range (its Fresnel tails): continue the local quadratic phase there.
+            if (j == 0)
+                evaluations += AddTail(f0, fd0, psi0, _tau[0], w0A, w0E, frame, outward: -1, df, maxBin, window, a, e, ref lowest, ref highest);
+            if (j + 2 == nodes)
+                evaluations += AddTail(f1, fd1, psi1, _tau[j + 1], w1A, w1E, frame, outward: +1, df, maxBin, window, a, e, ref lowest, ref highest);
         }
         return evaluations;
+    }
+
+    // Bins whose virtual stationary time lies beyond an end of the record (outward = −1 before the start, +1 after the
+    // end), with F(τ) = F_e + Ḟ_e (τ − τ_e) and Ψ the matching quadratic. Out to |z| = TailExtent.
+    private long AddTail(double fEdge, double fDotEdge, double psiEdge, double tauEdge, Complex wA, Complex wE, Truncation frame,
+        int outward, double df, int maxBin, BinWindow window, Span<Complex> a, Span<Complex> e, ref int lowest, ref int highest)
+    {
+        const double TailExtent = 20;
+        double reach = TailExtent / Math.Sqrt(2 * Math.Abs(fDotEdge));
+        double fOuter = fEdge + fDotEdge * outward * reach;
+        double fLow = Math.Min(fEdge, fOuter), fHigh = Math.Max(fEdge, fOuter);
+        if (fLow <= 0) fLow = df;
+        Track(fLow, fHigh, df, maxBin, ref lowest, ref highest);
+        // Strictly beyond the edge frequency on the outer side, so no bin is counted twice.
+        bool above = fOuter > fEdge;
+        int kFirst = above ? (int)Math.Floor(fEdge / df) + 1 : (int)Math.Ceiling(fLow / df);
+        int kLast = above ? (int)Math.Floor(fHigh / df) : (int)Math.Ceiling(fEdge / df) - 1;
+        kFirst = Math.Max(kFirst, Math.Max(window.First, 1));
+        kLast = Math.Min(kLast, Math.Min(window.End - 1, maxBin));
+        long evaluations = 0;
+        for (int bin = kFirst; bin <= kLast; bin++)
+        {
+            double f = bin * df;
+            double delta = (f - fEdge) / fDotEdge;
+            double psi = psiEdge + 2 * Math.PI * delta * (fEdge + 0.5 * fDotEdge * delta);
+            Emit(bin, f, tauEdge + delta, psi, fDotEdge, wA, wE, frame, window, a, e);
+            evaluations++;
+        }
+        return evaluations;
+    }
+
+    private static void Track(double fLow, double fHigh, double df, int maxBin, ref int lowest, ref int highest)
+    {
+        int first = Math.Max((int)Math.Ceiling(fLow / df), 1), last = Math.Min((int)Math.Floor(fHigh / df), maxBin);
+        if (last < first) return;
+        lowest = Math.Min(lowest, first);
+        highest = Math.Max(highest, last);
+    }
+
+    // One stationary-phase term: ½ W T(f) |Ḟ|^{-1/2} e^{i(Ψ − 2πf t*)} times the truncated Fresnel factor, which is
+    // e^{±iπ/4} for a stationary point deep inside the record.
+    private void Emit(int bin, double f, double tStar, double psi, double fDot, Complex wA, Complex wE, Truncation frame,
+        BinWindow window, Span<Complex> a, Span<Complex> e)
+    {
+        double phase = psi - 2 * Math.PI * f * tStar;
+        var (sinPhase, cosPhase) = Math.SinCos(phase);
+        double root = Math.Sqrt(2 * Math.Abs(fDot));
+        Complex fresnel = frame.Factor((frame.Begin - tStar) * root, (frame.End - tStar) * root);
+        // ∫ e^{iπḞτ²} dτ over the record = (G(z_b) − G(z_a)) / √(2|Ḟ|); the ½ is the positive-frequency half.
+        var rotation = _response.Transfer(f) * new Complex(cosPhase, sinPhase) * fresnel * (0.5 / root);
+        int o = bin - window.First;
+        a[o] += wA * rotation;
+        e[o] += wE * rotation;
+    }
+
+    // The record [Begin, End] in detector time and the sense of the chirp, for the truncated Fresnel integral.
+    private readonly record struct Truncation(double Begin, double End, bool Rising)
+    {
+        // G(z_b) − G(z_a) with G = C + iS for a rising chirp and its conjugate for a falling one.
+        public Complex Factor(double za, double zb)
+        {
+            const double Deep = 400;
+            if (za < -Deep && zb > Deep) return Rising ? new Complex(1, 1) : new Complex(1, -1);
+            Complex value = FresnelIntegral.Evaluate(zb) - FresnelIntegral.Evaluate(za);
+            return Rising ? value : Complex.Conjugate(value);
+        }
     }
 
     private Complex Amplitude(int j, int n, int v, int q, int channel)

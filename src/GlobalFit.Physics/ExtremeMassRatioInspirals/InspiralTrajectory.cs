@@ -161,8 +161,9 @@ public sealed class InspiralTrajectory
         {
             double mid = Math.Sqrt(low * high);
             trial[KludgeOrbitEquations.Frequency] = mid;
-            Evolve(equations, trial, 1.0e3 * plungeTimeSeconds + 1e9, maxStepSeconds: 1e6);
-            if (Plunged && EndSeconds < plungeTimeSeconds) high = mid; else low = mid;
+            // Only whether the plunge comes before the target matters, so each trial stops at the target time.
+            Evolve(equations, trial, plungeTimeSeconds, maxStepSeconds: 1e6);
+            if (Plunged) high = mid; else low = mid;
         }
         return Math.Sqrt(low * high);
     }

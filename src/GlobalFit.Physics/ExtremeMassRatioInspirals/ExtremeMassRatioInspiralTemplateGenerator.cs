@@ -143,6 +143,15 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
     /// <summary>Whether the last source plunged inside the record.</summary>
     public bool LastPlunged { get; private set; }
 
+    /// <summary>The bins the template of <paramref name="parameters"/> reaches (its kept sidebands and their edge tails),
+    /// clipped to the record; empty when nothing lies in it.</summary>
+    /// <exception cref="ArgumentOutOfRangeException">The parameters are invalid.</exception>
+    public BinWindow TemplateBins(in ExtremeMassRatioInspiralParameters parameters)
+    {
+        AddResponse(parameters, new BinWindow(0, 0), Span<Complex>.Empty, Span<Complex>.Empty, Span<Complex>.Empty);
+        return LastTemplateBins;
+    }
+
     /// <summary>Adds the A and E response of <paramref name="parameters"/> into the bins of <paramref name="window"/>.</summary>
     /// <param name="parameters">The source.</param>
     /// <param name="window">Bins covered by the outputs.</param>

@@ -411,7 +411,7 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
     private long AddTail(double fEdge, double fDotEdge, double psiEdge, double tauEdge, Complex wA, Complex wE, Truncation frame,
         int outward, double df, int maxBin, BinWindow window, Span<Complex> a, Span<Complex> e, ref int lowest, ref int highest)
     {
-        const double TailExtent = 20;
+        const double TailExtent = 5;
         double reach = TailExtent / Math.Sqrt(2 * Math.Abs(fDotEdge));
         double fOuter = fEdge + fDotEdge * outward * reach;
         double fLow = Math.Min(fEdge, fOuter), fHigh = Math.Max(fEdge, fOuter);
@@ -476,13 +476,16 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
             long evaluations = 0;
             double u = (kFirst * df - f0) / (f1 - f0);
             int bin = kFirst;
+            bool haveAnchor = false;
+            Anchor anchor = default;
             while (bin <= kLast)
             {
-                if (!Exact(bin * df, ref u, out var anchor))
+                if (!haveAnchor && !Exact(bin * df, ref u, out anchor))
                 {
                     bin++;
                     continue;
                 }
+                haveAnchor = false;
                 int next = Math.Min(bin + Block, kLast);
                 double uNext = u;
                 if (anchor.Edge || next == bin || !Exact(next * df, ref uNext, out var end) || end.Edge)
@@ -515,6 +518,8 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
                 evaluations += length;
                 bin = next;
                 u = uNext;
+                anchor = end;
+                haveAnchor = true;
             }
             return evaluations;
         }
@@ -566,8 +571,18 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
 
         public Complex Factor(double za, double zb)
         {
-            Complex value = FresnelIntegral.Evaluate(zb) - FresnelIntegral.Evaluate(za);
+            Complex value = Edge(zb) - Edge(za);
             return Rising ? value : Complex.Conjugate(value);
+        }
+
+        // G(z), with its far limit ±(1 + i)/2 once the ripple 1/(π|z|) is below 1 % (|z| > 32): the far end of the
+        // record then contributes no more than the interior bins, which also leave the ripple out.
+        private static Complex Edge(double z)
+        {
+            const double Far = 32;
+            if (z > Far) return new Complex(0.5, 0.5);
+            if (z < -Far) return new Complex(-0.5, -0.5);
+            return FresnelIntegral.Evaluate(z);
         }
     }
 

@@ -4,6 +4,10 @@ using Xunit.Abstractions;
 
 namespace GlobalFit.Physics.Tests.ExtremeMassRatioInspirals;
 
+// Yardstick: ExtremeMassRatioInspiralDirectWaveform (the Kepler quadrupole with all harmonics at every sample, FFT),
+// compared with A/E noise weighting over 0.05 mHz … Nyquist; criterion of the class design: match ≥ 0.99.
+// Measured: one month at 10 s, 0.99771 (e0 = 0), 0.99742 (0.2), 0.99778 (0.4), 0.99910 (plunging source); one year at
+// 10 s, worst 0.99905 (e0 = 0.2) over eight sources with e0 ≤ 0.4 (Long test), 0.99938 for e0 = 0.4 at 20 s.
 public sealed class FastTemplateAccuracyTests(ITestOutputHelper output)
 {
     [Theory]

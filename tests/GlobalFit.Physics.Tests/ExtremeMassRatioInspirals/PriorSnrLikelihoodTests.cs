@@ -129,3 +129,25 @@ public class PriorSnrLikelihoodTests
         Assert.Equal(atTruth, likelihood.LogLikelihoodRatio(p), 1e-12 * snr * snr);
     }
 }
+
+public class TemplateAllocationTests
+{
+    [Fact]
+    public void Template_and_likelihood_allocate_nothing_after_the_first_call()
+    {
+        var generator = new ExtremeMassRatioInspiralTemplateGenerator(10 * 86400.0, 10);
+        var p = InspiralComparison.Source(0.3);
+        var window = generator.TemplateBins(p);
+        var a = new Complex[window.Count];
+        var e = new Complex[window.Count];
+        var data = new Complex[window.Count];
+        var weights = Enumerable.Repeat(1e40, window.Count).ToArray();
+        var likelihood = new ExtremeMassRatioInspiralLikelihood(generator, window, data, data, weights, weights);
+        generator.AddResponse(p, window, a, e, Span<Complex>.Empty);
+        likelihood.LogLikelihoodRatio(p);
+        long before = GC.GetAllocatedBytesForCurrentThread();
+        generator.AddResponse(p with { Eccentricity0 = 0.25 }, window, a, e, Span<Complex>.Empty);
+        likelihood.LogLikelihoodRatio(p with { Phi0Rad = 1.0 });
+        Assert.Equal(0, GC.GetAllocatedBytesForCurrentThread() - before);
+    }
+}

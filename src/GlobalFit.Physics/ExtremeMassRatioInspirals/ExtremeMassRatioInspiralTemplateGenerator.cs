@@ -24,7 +24,7 @@ namespace GlobalFit.Physics.ExtremeMassRatioInspirals;
 /// of the energy.</item>
 /// <item>Each sideband goes straight to the frequency domain by the stationary-phase approximation,
 /// <c>h̃(f) = ½ W(t*) |Ḟ(t*)|^{−1/2} exp i[Ψ(t*) − 2πf t* + (π/4) sgn Ḟ]</c> with F(t*) = f (e.g. Cutler &amp; Flanagan
-/// 1994, Phys. Rev. D 49, 2658, Eq. 3.4 and the surrounding text; standard), times the Michelson transfer factor. On
+/// 1994, Phys. Rev. D 49, 2658, §III; section from memory; standard), times the Michelson transfer factor. On
 /// each grid interval the sideband frequency is the cubic Hermite interpolant of its values and exact derivatives at
 /// the two nodes, the phase is its integral started from the exact node phase, and t* for every bin in the interval
 /// comes from Newton's method on that cubic. Intervals where the frequency turns round (Ḟ changes sign) or crosses
@@ -33,6 +33,13 @@ namespace GlobalFit.Physics.ExtremeMassRatioInspirals;
 /// <para>No paper applying the stationary-phase approximation to this model was found; the accuracy claims rest on
 /// the comparison with <see cref="ExtremeMassRatioInspiralDirectWaveform"/> in the tests (match ≥ 0.99 for e0 ≤ 0.4
 /// over a month and a year). Edge effects at the start and end of the record (and at the plunge) are ignored.</para>
+/// <para>Implementation note: between exactly evaluated anchors 32 bins apart the phase follows a second-order
+/// recurrence (two complex multiplications per bin); within 5 Fresnel units of an end of the record every bin is
+/// evaluated exactly. Measured (BenchmarkDotNet, one year at 10 s, template plus log-likelihood over its bins, shared
+/// 2-core machine under a load average of 13–16, so read as upper bounds): 71 ms at e0 = 0.2 (2.6e5 bin evaluations)
+/// and 108 ms at e0 = 0.4 (1.2e6), of which ~9 ms is the orbit, grid and amplitudes; about 36 ms at e0 = 0.2 in a
+/// quieter run. The direct path takes 5.7–5.9 s for the same year. The bins near the record's ends, with their Fresnel
+/// factors, are the largest remaining cost.</para>
 /// <para>Not thread-safe: an instance owns its buffers; use one per worker. After construction nothing is
 /// allocated.</para>
 /// </remarks>

@@ -3,7 +3,7 @@ namespace GlobalFit.Physics.ExtremeMassRatioInspirals;
 /// <summary>Bessel functions of the first kind of integer order, <c>J_n(x)</c>, for the arguments the orbit harmonics
 /// need (<c>0 ≤ x &lt; |n|</c> mostly, x = n e).</summary>
 /// <remarks>
-/// <para>Power series <c>J_n(x) = Σ_k (−1)^k (x/2)^{2k+n} / (k! (n+k)!)</c> (Abramowitz &amp; Stegun 1964, Eq. 9.1.10),
+/// <para>Power series <c>J_n(x) = Σ_k (−1)^k (x/2)^{2k+n} / (k! (n+k)!)</c> (Abramowitz &amp; Stegun 1964, Eq. 9.1.10; equation numbers from memory),
 /// with the leading term formed in logarithms so that large orders do not overflow, and
 /// <c>J_{−n}(x) = (−1)^n J_n(x)</c> (Eq. 9.1.5). For x ≤ 25 the cancellation between terms costs at most about six of the
 /// sixteen digits; beyond that <see cref="MathNet.Numerics.SpecialFunctions.BesselJ(double, double)"/> is used.</para>

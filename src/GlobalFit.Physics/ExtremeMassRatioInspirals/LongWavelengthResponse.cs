@@ -8,7 +8,8 @@ namespace GlobalFit.Physics.ExtremeMassRatioInspirals;
 /// time, the barycentric delay of the constellation centre, and the frequency-domain transfer factor of the Michelson
 /// combinations.</summary>
 /// <remarks>
-/// <para>Barack &amp; Cutler 2004 (arXiv:gr-qc/0310125, §IV, after Cutler 1998, Phys. Rev. D 57, 7089) use two
+/// <para>Barack &amp; Cutler 2004 (arXiv:gr-qc/0310125, §IV, after Cutler 1998, Phys. Rev. D 57, 7089, arXiv:gr-qc/9703068; section and journal
+/// reference from memory) use two
 /// Michelson-like strain channels <c>(√3/2)(F+ A+ + F× A×)</c> of a rigidly rotating triangle. Here the same
 /// long-wavelength antenna pattern is computed from the constellation's own spacecraft positions: vertex tensors
 /// <c>D_X = ½(n₁₂n₁₂ − n₁₃n₁₃)</c>, D_Y, D_Z by cyclic relabelling, and

@@ -5,7 +5,7 @@ namespace GlobalFit.Physics.ExtremeMassRatioInspirals;
 /// <remarks>
 /// <para>Peters &amp; Mathews 1963, Phys. Rev. 131, 435: power in harmonic n is <c>P_circ g(n, e)</c> with
 /// <c>g(n, e) = (n⁴/32){[J_{n−2} − 2e J_{n−1} + (2/n) J_n + 2e J_{n+1} − J_{n+2}]² + (1 − e²)[J_{n−2} − 2J_n + J_{n+2}]²
-/// + (4/(3n²)) J_n²}</c> (Eq. 20; all J at argument n e), and <c>Σ_n g(n, e) = f(e) = (1 + 73/24 e² + 37/96 e⁴)(1 − e²)^{−7/2}</c>
+/// + (4/(3n²)) J_n²}</c> (Eq. 20, equation numbers from memory; all J at argument n e), and <c>Σ_n g(n, e) = f(e) = (1 + 73/24 e² + 37/96 e⁴)(1 − e²)^{−7/2}</c>
 /// (Eq. 17). The bracketed combinations are the same that Barack &amp; Cutler 2004 (arXiv:gr-qc/0310125, Eqs. 7–8) use
 /// for the waveform amplitudes a_n, b_n, c_n: <see cref="Alpha"/>, <see cref="Beta"/>, <see cref="RadialBessel"/>.
 /// Formulas recalled (from memory) and checked by the sum rule in the tests. Thread-safe.</para>

@@ -33,7 +33,7 @@ internal readonly record struct SymmetricTensor(double Xx, double Yy, double Zz,
         Xx * v.X * v.X + Yy * v.Y * v.Y + Zz * v.Z * v.Z + 2 * (Xy * v.X * v.Y + Xz * v.X * v.Z + Yz * v.Y * v.Z);
 
     /// <summary>Transverse-traceless part with respect to the direction <paramref name="n"/> (unit vector):
-    /// <c>P T P − ½ P tr(P T)</c>, <c>P = 1 − n n</c> (Misner, Thorne &amp; Wheeler 1973, Box 35.1).</summary>
+    /// <c>P T P − ½ P tr(P T)</c>, <c>P = 1 − n n</c> (Misner, Thorne &amp; Wheeler 1973, Box 35.1; box number from memory).</summary>
     public SymmetricTensor TransverseTraceless(Vector3D n)
     {
         // (P T P)_ij = T_ij − n_i (Tn)_j − (Tn)_i n_j + n_i n_j (nTn); tr(P T) = tr T − nTn.

@@ -2,7 +2,7 @@ namespace GlobalFit.Physics.Numerics;
 
 /// <summary>Cubic Hermite interpolation between two points with known values and first derivatives.</summary>
 /// <remarks>The cubic matching <c>y0, y0'</c> at <c>t0</c> and <c>y1, y1'</c> at <c>t1</c> (e.g. Hairer, Nørsett &amp;
-/// Wanner, Solving Ordinary Differential Equations I, 2nd ed. 1993, §II.6, Eq. 6.7). Its error is
+/// Wanner, Solving Ordinary Differential Equations I, 2nd ed. 1993, §II.6; section from memory). Its error is
 /// <c>h⁴ max|y⁗|/384</c> over a step of length h, so with the derivatives an integrator already has at its step
 /// points it gives a C¹ piecewise-cubic interpolant of fourth order without solving any system.</remarks>
 public static class CubicHermite

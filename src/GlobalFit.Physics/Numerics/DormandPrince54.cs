@@ -3,10 +3,10 @@ namespace GlobalFit.Physics.Numerics;
 /// <summary>Adaptive, error-controlled explicit Runge–Kutta integrator of order 5 with an embedded order-4 error
 /// estimate (Dormand–Prince 5(4)).</summary>
 /// <remarks>
-/// <para>Coefficients of Dormand &amp; Prince 1980, J. Comput. Appl. Math. 6, 19, Table 2 ("RK5(4)7M"); the step
+/// <para>Coefficients of Dormand &amp; Prince 1980, J. Comput. Appl. Math. 6, 19, Table 2 ("RK5(4)7M"; reference details from memory); the step
 /// advances with the fifth-order solution (local extrapolation) and the last stage is the first stage of the next
 /// step ("first same as last"), so an accepted step costs six evaluations. Error norm and step-size rule as in
-/// Hairer, Nørsett &amp; Wanner, Solving Ordinary Differential Equations I (2nd ed. 1993), §II.4, Eqs. 4.11–4.13:
+/// Hairer, Nørsett &amp; Wanner, Solving Ordinary Differential Equations I (2nd ed. 1993), §II.4, Eqs. 4.11–4.13 (equation numbers from memory):
 /// <c>err = sqrt(mean_i (δ_i / (atol_i + rtol max(|y_i|, |y_i,new|)))²)</c>, accept when err ≤ 1, next step
 /// <c>h · min(5, max(0.2, 0.9 err^(-1/5)))</c> (the safety factor 0.9 and the bounds are common practice).</para>
 /// <para>The integration runs forwards or backwards (end time before the start). Not thread-safe: an instance owns

@@ -5,7 +5,7 @@ namespace GlobalFit.Physics.Numerics;
 /// <summary>The Fresnel integral <c>C(z) + i S(z) = ∫₀^z e^{iπt²/2} dt</c>.</summary>
 /// <remarks>
 /// <para>For |z| ≤ 3 the power series <c>z Σ_k (iπz²/2)^k / (k! (2k + 1))</c> (Abramowitz &amp; Stegun 1964, Eq. 7.3.11
-/// and 7.3.13 combined), whose largest term is about e^{πz²/2} ≤ 1.3e6 times the result, so ~1e-10 absolute accuracy.
+/// and 7.3.13 combined; equation numbers from memory), whose largest term is about e^{πz²/2} ≤ 1.3e6 times the result, so ~1e-10 absolute accuracy.
 /// Beyond, <c>C = ½ + f sin(πz²/2) − g cos(πz²/2)</c>, <c>S = ½ − f cos(πz²/2) − g sin(πz²/2)</c> (Eqs. 7.3.9–7.3.10)
 /// with the asymptotic series of the auxiliary functions f and g (Eqs. 7.3.27–7.3.28) summed to their smallest term
 /// (about 5e-8 just above z = 3, better further out). Odd in z. Thread-safe and allocation-free.</para>

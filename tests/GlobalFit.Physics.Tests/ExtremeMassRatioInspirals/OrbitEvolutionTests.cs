@@ -45,7 +45,7 @@ public class OrbitEvolutionTests
     [Fact]
     public void Newtonian_eccentric_evolution_follows_the_peters_semi_major_axis_relation()
     {
-        // Peters 1964, Eq. 5.11: a(e) ∝ e^{12/19} (1 − e²)^{-1} (1 + 121/304 e²)^{870/2299}; ν ∝ a^{-3/2}.
+        // Peters 1964, Eq. 5.11 (equation number from memory): a(e) ∝ e^{12/19} (1 − e²)^{-1} (1 + 121/304 e²)^{870/2299}; ν ∝ a^{-3/2}.
         var equations = new KludgeOrbitEquations(1e6 * Msun, 10 * Msun, 0, 1, corrections: false);
         var trajectory = new InspiralTrajectory();
         double nu0 = 2e-4, e0 = 0.6;
@@ -91,7 +91,7 @@ public class OrbitEvolutionTests
     [InlineData(0.6)]
     public void Periapsis_precession_reduces_to_the_first_post_newtonian_rate(double e)
     {
-        // 1PN periastron advance per radial period: Δω = 6πM/(a(1 − e²)) (Robertson 1938; textbook), i.e.
+        // 1PN periastron advance per radial period: Δω = 6πM/(a(1 − e²)) (Robertson 1938, Ann. Math. 39, 101; textbook; reference from memory), i.e.
         // dγ̃/dt / (2πν) = 3x/(1 − e²) with x = (2πMν)^{2/3} = M/a.
         var equations = new KludgeOrbitEquations(1e6 * Msun, 10 * Msun, 0, 1);
         double m = 1e6 * Msun;

@@ -151,3 +151,34 @@ public class TemplateAllocationTests
         Assert.Equal(0, GC.GetAllocatedBytesForCurrentThread() - before);
     }
 }
+
+public class TemplateArgumentTests
+{
+    [Fact]
+    public void Generator_rejects_bad_records_windows_and_outputs()
+    {
+        Assert.Throws<ArgumentOutOfRangeException>(() => new ExtremeMassRatioInspiralTemplateGenerator(-1, 10));
+        Assert.Throws<ArgumentOutOfRangeException>(() => new ExtremeMassRatioInspiralTemplateGenerator(86400, 0));
+        Assert.Throws<ArgumentOutOfRangeException>(() => new ExtremeMassRatioInspiralTemplateGenerator(20, 10));
+        Assert.Throws<ArgumentOutOfRangeException>(() => new ExtremeMassRatioInspiralTemplateGenerator(86400, 10,
+            settings: new ExtremeMassRatioInspiralTemplateSettings(CoarseStepSeconds: 10)));
+        var generator = new ExtremeMassRatioInspiralTemplateGenerator(86400, 10);
+        var p = InspiralComparison.Source(0.2);
+        var outside = Assert.Throws<ArgumentOutOfRangeException>(() =>
+            generator.AddResponse(p, new BinWindow(generator.BinCount - 2, 10), new Complex[10], new Complex[10], Span<Complex>.Empty));
+        Assert.Contains("window", outside.Message);
+        Assert.Throws<ArgumentException>(() => generator.AddResponse(p, new BinWindow(0, 10), new Complex[9], new Complex[10], Span<Complex>.Empty));
+        var bad = Assert.Throws<ArgumentOutOfRangeException>(() =>
+            generator.AddResponse(p with { Eccentricity0 = -0.1 }, new BinWindow(0, 10), new Complex[10], new Complex[10], Span<Complex>.Empty));
+        Assert.Equal(ExtremeMassRatioInspiralParameters.EccentricityColumn, bad.ParamName);
+    }
+
+    [Fact]
+    public void Source_past_the_plunge_at_the_start_is_refused()
+    {
+        var generator = new ExtremeMassRatioInspiralTemplateGenerator(86400, 10);
+        var p = InspiralComparison.Source(0.2, nu0: 5e-3);
+        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => generator.TemplateBins(p));
+        Assert.Contains("plunge", ex.Message);
+    }
+}

@@ -31,6 +31,8 @@ public sealed class SemiCoherentStatisticTests(ITestOutputHelper output)
         var inverseA = new double[window.Count];
         var inverseE = new double[window.Count];
         var random = new Random(2024);
+        var noiseA = new Complex[window.Count];
+        var noiseE = new Complex[window.Count];
         double Gaussian() => Math.Sqrt(-2 * Math.Log(1 - random.NextDouble())) * Math.Cos(2 * Math.PI * random.NextDouble());
         foreach (var (channel, data, inverse) in new[] { (AetChannel.A, dataA, inverseA), (AetChannel.E, dataE, inverseE) })
         {
@@ -38,8 +40,17 @@ public sealed class SemiCoherentStatisticTests(ITestOutputHelper output)
             InnerProduct.InvertPsd(psd, inverse);
             // E|n_k|² = (T/2) S_k in the project's convention: each quadrature has variance T S_k / 4.
             for (int k = 0; k < window.Count; k++)
-                data[k] += Math.Sqrt(duration * psd[k] / 4) * new Complex(Gaussian(), Gaussian());
+            {
+                var n = Math.Sqrt(duration * psd[k] / 4) * new Complex(Gaussian(), Gaussian());
+                data[k] += n;
+                (channel == AetChannel.A ? noiseA : noiseE)[k] = n;
+            }
         }
+        // Noise alone at the true template: one draw of χ² with 20 degrees of freedom; [2, 55] holds it with
+        // probability 1 − 4e-5 (derived: χ²₂₀ tail beyond 55 is 4.1e-5, below 2 is 1.1e-7).
+        double noiseOnly = new SemiCoherentStatistic(generator, window, 10, noiseA, noiseE, inverseA, inverseE).Evaluate(truth);
+        output.WriteLine($"noise only {noiseOnly:F1}");
+        Assert.InRange(noiseOnly, 2, 55);
         var statistic = new SemiCoherentStatistic(generator, window, 10, dataA, dataE, inverseA, inverseE);
         double atTruth = statistic.Evaluate(truth);
         var prior = new ExtremeMassRatioInspiralPrior();

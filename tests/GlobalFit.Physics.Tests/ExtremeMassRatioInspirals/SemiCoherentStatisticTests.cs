@@ -13,8 +13,9 @@ public sealed class SemiCoherentStatisticTests(ITestOutputHelper output)
     {
         // 60 days at 20 s, M = 10 segments of 6 days; an e0 = 0.2 source scaled to SNR 30 in seeded Gaussian noise.
         // Noise alone gives χ² with 20 degrees of freedom (mean 20, sd 6.3); the truth adds ~ SNR² = 900. Random
-        // templates share the masses and lie within ±5 % in ν0, so they overlap the data's band: the false-failure
-        // rate (a random template reaching half the truth's value) is far below 1e-9 for χ²₂₀ tails.
+        // templates share the masses and lie within ±5 % in ν0, so they overlap the data's band and may catch part of
+        // the signal: with this seed the best of twelve reached 64 against 961 for the truth, so the bar (half the
+        // truth's value) leaves a margin of 7; pure χ²₂₀ noise would pass it with probability below 1e-9.
         double duration = 60 * 86400.0, cadence = 20;
         var generator = new ExtremeMassRatioInspiralTemplateGenerator(duration, cadence);
         var noise = new AetNoiseModel(InstrumentNoiseSettings.Default);

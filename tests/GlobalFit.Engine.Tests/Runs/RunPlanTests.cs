@@ -64,6 +64,14 @@ public sealed class RunPlanTests(SharedFitData data) : IClassFixture<SharedFitDa
     }
 
     [Fact]
+    public void A_massive_black_hole_binary_section_is_refused_because_fitting_the_class_is_not_built_yet()
+    {
+        var error = Refused("", extra: "[massive_black_hole_binaries]\n");
+        Assert.Contains("massive_black_hole_binaries", error.Message, StringComparison.Ordinal);
+        Assert.Contains("not built yet", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_schedule_that_misses_or_misnames_a_group_is_refused()
     {
         var misnamed = Refused("", extra: "[schedule]\nstages = [[\"galactic_binaries.evn\"], [\"galactic_binaries.odd\"], [\"noise\"]]\n");

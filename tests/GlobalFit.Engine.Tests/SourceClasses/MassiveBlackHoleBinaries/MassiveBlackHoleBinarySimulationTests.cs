@@ -5,10 +5,11 @@ using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Engine.SourceClasses.MassiveBlackHoleBinaries;
 using GlobalFit.Physics.Noise;
 using GlobalFit.Physics.Series;
+using Xunit.Abstractions;
 
 namespace GlobalFit.Engine.Tests.SourceClasses.MassiveBlackHoleBinaries;
 
-public class MassiveBlackHoleBinarySimulationTests
+public class MassiveBlackHoleBinarySimulationTests(ITestOutputHelper output)
 {
     // Ten days at 10 s: 86,400 samples per channel, which simulates in well under a second.
     private const string Observation = """
@@ -80,6 +81,7 @@ public class MassiveBlackHoleBinarySimulationTests
         double snr = truth[0, "snr"];
         double independent = IndependentSnr(with, without, Parse(Observation).Noise.Model());
         // Two FFTs of round-off (~1e-12 relative) separate the two numbers; 1e-8 leaves ample room.
+        output.WriteLine($"truth SNR {snr:R}, independent {independent:R}, relative difference {Math.Abs(snr - independent) / snr:E2}");
         Assert.Equal(independent, snr, 1e-8 * snr);
         Assert.True(snr > 100, $"a 1e6 M_sun chirp-mass merger at 20 Gpc inside the record should be loud, got SNR {snr}");
     }
@@ -102,6 +104,7 @@ public class MassiveBlackHoleBinarySimulationTests
         var inside = Simulate(Observation + "\n" + Binary(6 * 86_400.0));
         double lateSnr = late.Truth[0][0, "snr"];
         Assert.Equal(IndependentSnr(late, without, noise), lateSnr, 1e-8 * lateSnr);
+        output.WriteLine($"SNR merging after the end {lateSnr:R}, inside {inside.Truth[0][0, "snr"]:R}");
         Assert.InRange(lateSnr, 1e-3, 0.5 * inside.Truth[0][0, "snr"]);
     }
 

@@ -24,7 +24,7 @@ internal static class MassiveBlackHoleBinaryBench
         var a = new Complex[window.Count];
         var e = new Complex[window.Count];
         var t = new Complex[window.Count];
-        const int renders = 20;
+        const int renders = 10;
         double templateSeconds = QuickTimer.BestSeconds(() =>
         {
             for (int i = 0; i < renders; i++) generator.RenderBins(source, window, dfHz, a, e, t);

@@ -56,14 +56,6 @@ public sealed class RunPlanTests(SharedFitData data) : IClassFixture<SharedFitDa
     }
 
     [Fact]
-    public void A_class_without_an_implementation_is_refused_naming_its_section()
-    {
-        var error = Refused("", extra: "[extreme_mass_ratio_inspirals]\ncount = 1\n");
-        Assert.Contains("extreme_mass_ratio_inspirals", error.Message, StringComparison.Ordinal);
-        Assert.Contains("no implementation", error.Message, StringComparison.Ordinal);
-    }
-
-    [Fact]
     public void A_massive_black_hole_binary_section_is_refused_because_fitting_the_class_is_not_built_yet()
     {
         var error = Refused("", extra: "[massive_black_hole_binaries]\n");

@@ -8,10 +8,9 @@ namespace GlobalFit.Engine.Tests.SourceClasses.MassiveBlackHoleBinaries;
 public class MassiveBlackHoleBinaryClassTests(ITestOutputHelper output)
 {
     [Fact]
-    public void The_class_is_registered_between_galactic_binaries_and_noise_and_no_longer_planned()
+    public void The_class_is_registered_after_galactic_binaries_with_its_columns_and_simulation()
     {
-        Assert.Equal(["galactic_binaries", MassiveBlackHoleBinaryClass.Id, "noise"], SourceClassRegistry.Default.Ids);
-        Assert.DoesNotContain(MassiveBlackHoleBinaryClass.Id, SourceClassRegistry.Planned);
+        Assert.Equal(["galactic_binaries", MassiveBlackHoleBinaryClass.Id, "extreme_mass_ratio_inspirals", "noise"], SourceClassRegistry.Default.Ids);
         var module = SourceClassRegistry.Default.Find(MassiveBlackHoleBinaryClass.Id)!;
         Assert.Equal(MassiveBlackHoleBinaryParameters.ColumnNames, module.ParameterColumns);
         Assert.Null(module.Demo);

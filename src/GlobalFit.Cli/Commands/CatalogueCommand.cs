@@ -18,18 +18,24 @@ public static class CatalogueCommand
         format.AcceptOnlyFromAmong("csv", "json", "h5");
         var output = new Option<string?>("--out") { Description = "File to write (default: print CSV/JSON; h5 needs --out)" };
         var force = new Option<bool>("--force") { Description = "Replace an existing output file" };
-        var command = new Command("catalogue", "Export the catalogue of a run from its stored samples") { run, format, output, force };
-        command.SetAction(parse => Run(context, parse.GetValue(run)!, parse.GetValue(format)!, parse.GetValue(output), parse.GetValue(force)));
+        var acceptNewData = ResumeCommand.AcceptNewDataOption();
+        var command = new Command("catalogue", "Export the catalogue of a run from its stored samples") { run, format, output, force, acceptNewData };
+        command.SetAction(parse => Run(context, parse.GetValue(run)!, parse.GetValue(format)!, parse.GetValue(output), parse.GetValue(force),
+            parse.GetValue(acceptNewData)));
         return command;
     }
 
-    private static int Run(CliContext context, string runFolder, string format, string? output, bool force)
+    private static int Run(CliContext context, string runFolder, string format, string? output, bool force, bool acceptNewData)
     {
         var layout = RunFolderLayout.OpenExisting(runFolder);
         if (format == "h5" && output is null) throw new InvalidInputException("--out", null, "the h5 format needs a file: --out FILE.h5");
         string? target = output is null ? null : Console.OutputPaths.CheckWritable(output, force, "--out");
         var plan = RunPlan.Load(layout.ResolvedConfig);
-        var records = RunCatalogue.Build(plan, layout, message => context.Error.WriteLine($"warning: {message}"));
+        Action<string> warn = message => context.Error.WriteLine($"warning: {message}");
+        // The catalogue is built from stored samples alone, but it describes the data file the run names: a different
+        // file there would pair the samples with data they were not drawn from.
+        DataIdentity.Verify(layout, plan.Settings.DataPath, acceptNewData, warn);
+        var records = RunCatalogue.Build(plan, layout, warn);
         switch (format)
         {
             case "csv" when target is null: context.Out.Write(CatalogueCsvWriter.Format(records)); break;

@@ -39,6 +39,7 @@ public static class DemoCommand
     private static int Run(CliContext context, string folder, bool force, int iterations)
     {
         string full = Path.GetFullPath(folder);
+        if (File.Exists(full)) throw new InvalidInputException(folder, "--out", "is a file, not a folder");
         bool ours = File.Exists(Path.Combine(full, MarkerFile));
         if (Directory.Exists(full) && !ours && Directory.EnumerateFileSystemEntries(full).Any() && !force)
             throw new InvalidInputException(folder, "--out", "exists and was not made by the demo; choose another folder or pass --force");

@@ -11,8 +11,14 @@ public static class ResumeCommand
     {
         var run = new Argument<string>("run") { Description = "The run folder" };
         var otlp = FitCommand.OtlpOption();
-        var command = new Command("resume", "Continue a stopped fit exactly where its last checkpoint left it") { run, otlp };
-        command.SetAction(parse => FitCommand.Run(context, options => FitRunner.Resume(parse.GetValue(run)!, options), parse.GetValue(otlp)));
+        var acceptNewData = AcceptNewDataOption();
+        var command = new Command("resume", "Continue a stopped fit exactly where its last checkpoint left it") { run, otlp, acceptNewData };
+        command.SetAction(parse => FitCommand.Run(context,
+            options => FitRunner.Resume(parse.GetValue(run)!, options with { AcceptNewData = parse.GetValue(acceptNewData) }), parse.GetValue(otlp)));
         return command;
     }
+
+    /// <summary><c>--accept-new-data</c>, shared with <c>catalogue</c>.</summary>
+    internal static Option<bool> AcceptNewDataOption() =>
+        new("--accept-new-data") { Description = "Go on although the data file is not the one the run was fitted to (its size or SHA-256 changed)" };
 }

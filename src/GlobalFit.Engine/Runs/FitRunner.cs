@@ -32,12 +32,14 @@ public static class FitRunner
         // Everything that can be wrong with the data is found before the run folder is touched, so a refused fit leaves
         // nothing behind that would block a retry.
         var data = LoadData(plan, options.Progress);
+        var identity = DataIdentity.Of(plan.Settings.DataPath);
         bool unstarted = layout.HoldsUnstartedRun();
         Directory.CreateDirectory(layout.Root);
         using var runLock = RunLock.Acquire(layout);
         if (unstarted) layout.ClearUnstartedRun();
         string resolved = plan.ResolvedToml();
         AtomicFile.Write(layout.ResolvedConfig, overwrite: false, s => s.Write(Encoding.UTF8.GetBytes(resolved)));
+        identity.Write(layout);
         return Run(plan, layout, Digest(resolved), data, FitPosition.Fresh(plan.Workers), options);
     }
 
@@ -67,6 +69,8 @@ public static class FitRunner
         if (plan.Settings.RunFolder != layout.Root)
             throw new InvalidInputException(layout.ResolvedConfig, "key 'run_folder'", $"names {plan.Settings.RunFolder}, but the run is in {layout.Root}; a moved run folder must have run_folder updated");
         string digest = Digest(resolved);
+        // Checked before anything in the folder changes: a refused resume leaves the run as it was.
+        var identity = DataIdentity.Verify(layout, plan.Settings.DataPath, options.AcceptNewData, options.Progress.Warning);
         FitPosition start;
         var store = new SampleStore(layout.Root);
         if (CheckpointFile.Exists(layout.Root))
@@ -83,8 +87,9 @@ public static class FitRunner
         {
             start = FitPosition.Fresh(plan.Workers);
         }
-        store.TruncateAfter(start.Iteration);
         var data = LoadData(plan, options.Progress);
+        store.TruncateAfter(start.Iteration);
+        identity.Write(layout);
         return Run(plan, layout, digest, data, start, options);
     }
 

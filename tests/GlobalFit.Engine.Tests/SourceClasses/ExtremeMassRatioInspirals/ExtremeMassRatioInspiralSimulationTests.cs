@@ -90,7 +90,7 @@ public class ExtremeMassRatioInspiralSimulationTests(ITestOutputHelper output)
 
     [Theory]
     [InlineData("1e308")]
-    [InlineData("99999999999999999999")]
+    [InlineData("1e30")]
     public void A_plunge_time_no_orbit_reaches_is_refused_naming_the_key(string value)
     {
         string text = Observation + "\n" + OneInspiral.Replace("orbital_frequency0_hz = 1e-3", "plunge_time_s = " + value, StringComparison.Ordinal);

@@ -81,7 +81,9 @@ public sealed class ExtremeMassRatioInspiralSimulation : ISimulatedSourceClass
         }
         else
         {
-            plunge = t.GetPositive(P.PlungeTimeColumn, 1e7);
+            // Up to 1e10 s (about 300 years): a later plunge starts below the band a mission of years can use, and its
+            // trajectory would not fit the integrator's store.
+            plunge = t.GetInRange(P.PlungeTimeColumn, 1e7, 1, 1e10);
             try
             {
                 nu0 = new InspiralTrajectory().FrequencyForPlungeTime(equations, [0, 0, 0, e0, 0], plunge.Value);

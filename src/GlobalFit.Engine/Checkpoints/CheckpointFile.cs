@@ -63,7 +63,7 @@ public static class CheckpointFile
 
     private static void WriteTemporary(string temporary, RunCheckpoint checkpoint)
     {
-        using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
+        using (var stream = WriteStreams.Open(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
         {
             // The payload is serialised straight to the file behind a placeholder header, which is filled in once its
             // length and digest are known: a checkpoint of thousands of workers is never held whole in memory.

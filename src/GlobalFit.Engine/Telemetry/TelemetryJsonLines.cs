@@ -24,7 +24,7 @@ public sealed class TelemetryJsonLines : IDisposable
         Path = path;
         try
         {
-            _stream = new FileStream(path, FileMode.Append, FileAccess.Write, FileShare.ReadWrite | FileShare.Delete);
+            _stream = WriteStreams.Open(path, FileMode.Append, FileAccess.Write, FileShare.ReadWrite | FileShare.Delete);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {

@@ -23,7 +23,7 @@ public static class AtomicFile
         bool renamed = false;
         try
         {
-            using (var stream = new FileStream(temporary, FileMode.CreateNew, FileAccess.ReadWrite, FileShare.None))
+            using (var stream = WriteStreams.Open(temporary, FileMode.CreateNew, FileAccess.ReadWrite, FileShare.None))
             {
                 writeContent(stream);
                 stream.Flush(flushToDisk: true);

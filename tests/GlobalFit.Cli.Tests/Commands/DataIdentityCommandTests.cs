@@ -21,6 +21,10 @@ public sealed class DataIdentityCommandTests
         bytes[bytes.Length / 2] ^= 1;
         File.WriteAllBytes(data, bytes);
 
+        // As a killed fit leaves it: status.json still says running, and no process holds the lock.
+        string statusFile = Path.Combine(run, "status.json");
+        File.WriteAllText(statusFile, File.ReadAllText(statusFile).Replace("\"completed\"", "\"running\"", StringComparison.Ordinal));
+
         foreach (var refused in new[] { CliRun.Run("catalogue", run), CliRun.Run("resume", run) })
         {
             Assert.Equal(ExitCodes.BadInput, refused.ExitCode);
@@ -28,6 +32,9 @@ public sealed class DataIdentityCommandTests
             Assert.Contains(data, line, StringComparison.Ordinal);
             Assert.Contains("--accept-new-data", line, StringComparison.Ordinal);
         }
+        // After the refused resume the run is reported as stopped, not as running.
+        var status = CliRun.Run("status", run, "--json");
+        Assert.Equal("stopped", System.Text.Json.JsonDocument.Parse(status.Out).RootElement.GetProperty("state").GetString());
         var accepted = CliRun.Run("catalogue", run, "--accept-new-data");
         Assert.Equal(0, accepted.ExitCode);
         Assert.Contains("warning:", accepted.Error, StringComparison.Ordinal);

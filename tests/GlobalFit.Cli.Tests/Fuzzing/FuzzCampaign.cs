@@ -68,7 +68,7 @@ internal static class FuzzCampaign
         {
             tally.Crashes.Add($"{label}: {e.InnerException!.GetType().Name}: {e.InnerException.Message}\n{e.InnerException.StackTrace}");
         }
-        if (allocated > AllocationBound) tally.OverAllocations.Add($"{label}: allocated {allocated >> 20} MB");
+        if (allocated > target.AllocationBound) tally.OverAllocations.Add($"{label}: allocated {allocated >> 20} MB");
         return true;
     }
 }

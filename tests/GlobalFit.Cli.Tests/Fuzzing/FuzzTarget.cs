@@ -14,4 +14,8 @@ internal sealed record FuzzTarget(
     IReadOnlyList<byte[]> Seeds,
     Func<byte[], byte[], Random, byte[]> Mutate,
     Func<byte[], string?> Read,
-    Func<byte[], byte[]>? Reseal = null);
+    Func<byte[], byte[]>? Reseal = null)
+{
+    /// <summary>Bytes one input may allocate; <see cref="FuzzCampaign.AllocationBound"/> unless the reader states another.</summary>
+    public long AllocationBound { get; init; } = FuzzCampaign.AllocationBound;
+}

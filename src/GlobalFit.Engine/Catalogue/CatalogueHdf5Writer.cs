@@ -1,3 +1,4 @@
+using System.Reflection;
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Physics.Files;
 using PureHDF;
@@ -23,8 +24,13 @@ public static class CatalogueHdf5Writer
         foreach (var group in records.GroupBy(r => r.ClassId, StringComparer.Ordinal).OrderBy(g => g.Key, StringComparer.Ordinal))
             catalogue[group.Key] = ClassGroup([.. group]);
         file[L.CatalogueGroup] = catalogue;
-        AtomicFile.Write(path, overwrite, stream => file.Write(stream));
+        AtomicFile.Write(path, overwrite, stream => file.Write(stream, WriteOptions));
     }
+
+    // PureHDF 2.2.0 names compound members after the C# fields when writing and honours [H5Name] only when reading,
+    // so the writer maps each field to its [H5Name] itself; without this the members were `Id`, `Confidence`, ….
+    private static readonly H5WriteOptions WriteOptions = new(
+        FieldNameMapper: field => field.GetCustomAttribute<H5NameAttribute>()?.Name ?? field.Name);
 
     private static H5Group ClassGroup(IReadOnlyList<CatalogueRecord> records)
     {

@@ -6,7 +6,7 @@ using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Commands;
 
-/// <summary><c>globalfit catalogue RUN --format csv|json|h5</c>: export a run's catalogue (entries with medians, 90 %
+/// <summary><c>globalfit catalogue RUN --format csv|json|h5</c>: export a run's catalogue (sources with medians, 90 %
 /// intervals, SNR and confidence, plus posterior samples in JSON and HDF5), also while the fit is still running.</summary>
 public static class CatalogueCommand
 {
@@ -38,7 +38,7 @@ public static class CatalogueCommand
             case "json": CatalogueJsonWriter.Write(target, records, overwrite: force); break;
             default: CatalogueHdf5Writer.Write(target!, records, overwrite: force); break;
         }
-        if (target is not null) context.Error.WriteLine($"wrote {target}: {records.Length} entries");
+        if (target is not null) context.Error.WriteLine($"wrote {target}: {records.Length} sources");
         return ExitCodes.Success;
     }
 }

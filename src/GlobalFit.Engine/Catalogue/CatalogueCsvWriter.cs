@@ -19,7 +19,7 @@ public static class CatalogueCsvWriter
 
     /// <summary>Writes <paramref name="records"/> to <paramref name="path"/>, atomically.</summary>
     /// <param name="path">Destination.</param>
-    /// <param name="records">The entries, written in this order.</param>
+    /// <param name="records">The sources, written in this order.</param>
     /// <param name="overwrite">Replace an existing file.</param>
     /// <exception cref="InvalidInputException">The file exists and <paramref name="overwrite"/> is false, or cannot be written.</exception>
     /// <exception cref="ArgumentException">A record is inconsistent.</exception>
@@ -31,7 +31,7 @@ public static class CatalogueCsvWriter
     }
 
     /// <summary>The CSV text of <paramref name="records"/>: a header line, then one line per record, lines ending in LF.</summary>
-    /// <param name="records">The entries.</param>
+    /// <param name="records">The sources.</param>
     /// <returns>The text.</returns>
     public static string Format(IReadOnlyList<CatalogueRecord> records)
     {

@@ -8,11 +8,11 @@ namespace GlobalFit.Engine.Catalogue;
 public static class CatalogueJsonWriter
 {
     /// <summary>Version of the JSON shape, written as <c>format_version</c>.</summary>
-    public const int FormatVersion = 1;
+    public const int FormatVersion = 2;
 
     /// <summary>Writes <paramref name="records"/> to <paramref name="path"/>, atomically.</summary>
     /// <param name="path">Destination.</param>
-    /// <param name="records">The entries, written in this order.</param>
+    /// <param name="records">The sources, written in this order.</param>
     /// <param name="overwrite">Replace an existing file.</param>
     /// <exception cref="InvalidInputException">The file exists and <paramref name="overwrite"/> is false, or cannot be written.</exception>
     /// <exception cref="ArgumentException">A record is inconsistent.</exception>
@@ -27,7 +27,7 @@ public static class CatalogueJsonWriter
     }
 
     /// <summary>The document as text, for printing.</summary>
-    /// <param name="records">The entries, in this order.</param>
+    /// <param name="records">The sources, in this order.</param>
     public static string Format(IReadOnlyList<CatalogueRecord> records)
     {
         CatalogueRecordChecks.Require(records);
@@ -40,7 +40,7 @@ public static class CatalogueJsonWriter
     {
         json.WriteStartObject();
         json.WriteNumber("format_version", FormatVersion);
-        json.WriteStartArray("entries");
+        json.WriteStartArray("sources");
         foreach (var r in records)
         {
             json.WriteStartObject();

@@ -4,9 +4,9 @@ using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Samples;
 
-/// <summary>The commit point of a chains folder: the last iteration whose samples are all on disk, and how many bytes of
+/// <summary>The commit point of a samples folder: the last iteration whose samples are all on disk, and how many bytes of
 /// each chain file belong to committed iterations. Bytes past a file's committed length are an interrupted append.</summary>
-/// <remarks>Stored as the text file <c>chains/committed</c> (Catalogue/LAYOUT.md) and replaced atomically after the chain
+/// <remarks>Stored as the text file <c>samples/committed</c> (Catalogue/LAYOUT.md) and replaced atomically after the chain
 /// files are flushed, so a crash at any moment leaves either the old or the new commit point, never a mixture.</remarks>
 internal sealed record CommitManifest(long Iteration, IReadOnlyDictionary<string, long> Lengths)
 {

@@ -3,7 +3,7 @@ using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Samples;
 
-/// <summary>The append-only sample store of a run: one checksummed chain file per worker in <c>RUN/chains/</c>, plus a
+/// <summary>The append-only sample store of a run: one checksummed chain file per worker in <c>RUN/samples/</c>, plus a
 /// commit point naming the last iteration whose samples are all on disk (layout in Catalogue/LAYOUT.md).</summary>
 /// <remarks>
 /// <para>An iteration is committed in two steps: its records are appended to the workers' files and flushed to disk,
@@ -16,7 +16,7 @@ namespace GlobalFit.Engine.Samples;
 public sealed class SampleStore
 {
     /// <summary>Name of the folder inside the run folder that holds the chain files.</summary>
-    public const string ChainsFolderName = "chains";
+    public const string SamplesFolderName = "samples";
 
     /// <summary>Opens the store of <paramref name="runFolder"/>; nothing is created until the first append.</summary>
     /// <param name="runFolder">The run folder.</param>
@@ -24,17 +24,17 @@ public sealed class SampleStore
     {
         ArgumentException.ThrowIfNullOrEmpty(runFolder);
         RunFolder = runFolder;
-        ChainsFolder = Path.Combine(runFolder, ChainsFolderName);
+        SamplesFolder = Path.Combine(runFolder, SamplesFolderName);
     }
 
     /// <summary>The run folder.</summary>
     public string RunFolder { get; }
 
     /// <summary>The folder holding the chain files.</summary>
-    public string ChainsFolder { get; }
+    public string SamplesFolder { get; }
 
     /// <summary>The last committed iteration (0 when nothing was committed).</summary>
-    public long CommittedIteration => CommitManifest.Load(ChainsFolder).Iteration;
+    public long CommittedIteration => CommitManifest.Load(SamplesFolder).Iteration;
 
     /// <summary>Appends all the blocks of one iteration and commits the iteration: when this returns, the samples are on
     /// disk.</summary>
@@ -48,17 +48,17 @@ public sealed class SampleStore
         ArgumentNullException.ThrowIfNull(blocks);
         if (blocks.Count == 0) return;
         if (!Directory.Exists(RunFolder)) throw new InvalidInputException(RunFolder, null, "run folder does not exist");
-        var manifest = CommitManifest.Load(ChainsFolder);
+        var manifest = CommitManifest.Load(SamplesFolder);
         long iteration = CheckIteration(blocks, manifest.Iteration);
-        Directory.CreateDirectory(ChainsFolder);
+        Directory.CreateDirectory(SamplesFolder);
 
         var lengths = new Dictionary<string, long>(manifest.Lengths, StringComparer.Ordinal);
         foreach (var block in blocks.OrderBy(b => b.WorkerId, StringComparer.Ordinal))
         {
             string fileName = WorkerFileName.FromWorkerId(block.WorkerId);
-            lengths[fileName] = AppendRecord(Path.Combine(ChainsFolder, fileName), manifest.LengthOf(fileName), SampleRecordFormat.Encode(block));
+            lengths[fileName] = AppendRecord(Path.Combine(SamplesFolder, fileName), manifest.LengthOf(fileName), SampleRecordFormat.Encode(block));
         }
-        new CommitManifest(iteration, lengths).Save(ChainsFolder);
+        new CommitManifest(iteration, lengths).Save(SamplesFolder);
     }
 
     /// <summary>Prepares a resume from the state of <paramref name="iteration"/>: removes every record of a later iteration
@@ -69,8 +69,8 @@ public sealed class SampleStore
     public IReadOnlyList<SegmentTruncation> TruncateAfter(long iteration)
     {
         ArgumentOutOfRangeException.ThrowIfNegative(iteration);
-        if (!Directory.Exists(ChainsFolder)) return [];
-        var manifest = CommitManifest.Load(ChainsFolder);
+        if (!Directory.Exists(SamplesFolder)) return [];
+        var manifest = CommitManifest.Load(SamplesFolder);
         long keep = Math.Min(iteration, manifest.Iteration);
         var cuts = new List<(string Path, long Length)>();
         var dropped = new List<SegmentTruncation>();
@@ -78,10 +78,10 @@ public sealed class SampleStore
         var files = ChainFiles().ToList();
         foreach (var (fileName, committedLength) in manifest.Lengths)
             if (committedLength > 0 && !files.Any(f => f.FileName == fileName))
-                throw new InvalidInputException(Path.Combine(ChainsFolder, fileName), null, $"is missing but {committedLength} bytes of it were committed");
+                throw new InvalidInputException(Path.Combine(SamplesFolder, fileName), null, $"is missing but {committedLength} bytes of it were committed");
         foreach (var (workerId, fileName) in files)
         {
-            string path = Path.Combine(ChainsFolder, fileName);
+            string path = Path.Combine(SamplesFolder, fileName);
             long committed = manifest.LengthOf(fileName);
             long cut = 0;
             int recordsDropped = 0;
@@ -102,7 +102,7 @@ public sealed class SampleStore
             dropped.Add(new SegmentTruncation(workerId, recordsDropped, firstDropped, fileLength - committed));
         }
         // The commit point moves back first: a crash before the files are cut leaves only uncommitted bytes.
-        new CommitManifest(keep, lengths).Save(ChainsFolder);
+        new CommitManifest(keep, lengths).Save(SamplesFolder);
         foreach (var (path, length) in cuts) CutFile(path, length);
         return dropped;
     }
@@ -115,7 +115,7 @@ public sealed class SampleStore
     public IEnumerable<SampleBlock> Read(string workerId)
     {
         ArgumentException.ThrowIfNullOrEmpty(workerId);
-        return ReadWorker(workerId, WorkerFileName.FromWorkerId(workerId), CommitManifest.Load(ChainsFolder));
+        return ReadWorker(workerId, WorkerFileName.FromWorkerId(workerId), CommitManifest.Load(SamplesFolder));
     }
 
     /// <summary>Every committed block of every worker, ordered by iteration, then worker id (ordinal), each verified.</summary>
@@ -124,8 +124,8 @@ public sealed class SampleStore
     /// enumerating.</exception>
     public IEnumerable<SampleBlock> ReadAll()
     {
-        if (!Directory.Exists(ChainsFolder)) yield break;
-        var manifest = CommitManifest.Load(ChainsFolder);
+        if (!Directory.Exists(SamplesFolder)) yield break;
+        var manifest = CommitManifest.Load(SamplesFolder);
         var cursors = new List<IEnumerator<SampleBlock>>();
         var queue = new PriorityQueue<IEnumerator<SampleBlock>, (long Iteration, string WorkerId)>(IterationThenWorker.Instance);
         try
@@ -154,8 +154,8 @@ public sealed class SampleStore
     public IReadOnlyDictionary<string, long> CountSamples()
     {
         var counts = new SortedDictionary<string, long>(StringComparer.Ordinal);
-        if (!Directory.Exists(ChainsFolder)) return counts;
-        var manifest = CommitManifest.Load(ChainsFolder);
+        if (!Directory.Exists(SamplesFolder)) return counts;
+        var manifest = CommitManifest.Load(SamplesFolder);
         foreach (var (workerId, fileName) in ChainFiles())
         {
             long count = 0;
@@ -167,7 +167,7 @@ public sealed class SampleStore
 
     private IEnumerable<SampleBlock> ReadWorker(string workerId, string fileName, CommitManifest manifest)
     {
-        string path = Path.Combine(ChainsFolder, fileName);
+        string path = Path.Combine(SamplesFolder, fileName);
         long committed = manifest.LengthOf(fileName);
         if (!File.Exists(path))
         {
@@ -179,13 +179,13 @@ public sealed class SampleStore
 
     private IEnumerable<(string WorkerId, string FileName)> ChainFiles()
     {
-        if (!Directory.Exists(ChainsFolder)) return [];
+        if (!Directory.Exists(SamplesFolder)) return [];
         var files = new List<(string, string)>();
-        foreach (string path in Directory.EnumerateFiles(ChainsFolder, "*" + WorkerFileName.Extension))
+        foreach (string path in Directory.EnumerateFiles(SamplesFolder, "*" + WorkerFileName.Extension))
         {
             string fileName = Path.GetFileName(path);
             string workerId = WorkerFileName.ToWorkerId(fileName)
-                ?? throw new InvalidInputException(path, null, "is not a chain file name globalfit writes; move it out of the chains folder");
+                ?? throw new InvalidInputException(path, null, "is not a chain file name globalfit writes; move it out of the samples folder");
             files.Add((workerId, fileName));
         }
         return files.OrderBy(f => f.Item1, StringComparer.Ordinal);

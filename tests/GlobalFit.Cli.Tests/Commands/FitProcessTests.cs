@@ -39,7 +39,7 @@ public class FitProcessTests
 
         var catalogue = CliRun.Run("catalogue", killedRun, "--format", "json");
         Assert.Equal(0, catalogue.ExitCode);
-        Assert.True(JsonDocument.Parse(catalogue.Out).RootElement.GetProperty("entries").GetArrayLength() >= 3);
+        Assert.True(JsonDocument.Parse(catalogue.Out).RootElement.GetProperty("sources").GetArrayLength() >= 3);
         var trace = CliRun.Run("trace", killedRun, "--json");
         Assert.Equal(0, trace.ExitCode);
     }

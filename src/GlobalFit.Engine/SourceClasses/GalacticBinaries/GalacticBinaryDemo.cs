@@ -25,7 +25,7 @@ internal sealed class GalacticBinaryDemo : IDemoPart
         f_min_hz = 2e-3
         f_max_hz = 5e-3
         window_bins = 256
-        padding_bins = 64
+        margin_bins = 64
         steps_per_update = 300
         temperatures = 4
         max_sources_per_window = 12
@@ -54,12 +54,12 @@ internal sealed class GalacticBinaryDemo : IDemoPart
         output.WriteLine(string.Create(CultureInfo.InvariantCulture,
             $"demo: galactic binaries {low * 1e3:F2}-{high * 1e3:F2} mHz: {result.DetectableCount} injected with SNR >= {DetectableSnr}; found {result.Found.Length}, missed {result.Missed.Length}; {sources.Count} catalogue entries, {result.Spurious.Length} spurious"));
         output.WriteLine("  found (median - truth in posterior sigma):");
-        output.WriteLine("    truth          entry      SNR inj  SNR fit  conf    f0     fdot   amp    beta   lambda");
+        output.WriteLine("    truth          entry      SNR inj  SNR fit  conf    f0     fdot   amplitude    beta   lambda");
         foreach (var f in result.Found)
         {
             string E(string name) => f.ErrorsInSigma.TryGetValue(name, out double v) ? (Math.Round(v, 1) == 0 ? 0.0 : v).ToString("+0.0;-0.0;0.0", CultureInfo.InvariantCulture).PadLeft(6) : "     -";
             output.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"    {f.TruthId,-14} {f.EntryId,-10} {f.InjectedSnr,7:F1}  {f.EntrySnr,7:F1}  {f.Confidence,4:F2}  {E("f0_hz")} {E("fdot_hz_s")} {E("amp")} {E("beta_rad")} {E("lambda_rad")}"));
+                $"    {f.TruthId,-14} {f.EntryId,-10} {f.InjectedSnr,7:F1}  {f.EntrySnr,7:F1}  {f.Confidence,4:F2}  {E("f0_hz")} {E("fdot_hz_s")} {E("amplitude")} {E("beta_rad")} {E("lambda_rad")}"));
         }
         foreach (var m in result.Missed)
             output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  missed {m.TruthId} at {m.Key * 1e3:F5} mHz, SNR {m.InjectedSnr:F1}"));

@@ -53,7 +53,7 @@ public sealed class GalacticBinarySimulation : ISimulatedSourceClass
         double fdot = t.GetDouble(GalacticBinaryParameters.FrequencyDerivativeColumn, 0.0);
         if (!double.IsFinite(fdot)) throw t.Invalid(GalacticBinaryParameters.FrequencyDerivativeColumn, "must be finite");
         if (!t.Has(GalacticBinaryParameters.AmplitudeColumn)) throw t.InvalidTable($"each binary needs '{GalacticBinaryParameters.AmplitudeColumn}'");
-        double amp = t.GetPositive(GalacticBinaryParameters.AmplitudeColumn, 1e-22);
+        double amplitude = t.GetPositive(GalacticBinaryParameters.AmplitudeColumn, 1e-22);
         double beta = t.GetInRange(GalacticBinaryParameters.EclipticLatitudeColumn, 0.0, -Math.PI / 2, Math.PI / 2);
         double lambda = t.GetInRange(GalacticBinaryParameters.EclipticLongitudeColumn, 0.0, 0, 2 * Math.PI);
         double iota = t.GetInRange(GalacticBinaryParameters.InclinationColumn, 0.0, 0, Math.PI);
@@ -62,7 +62,7 @@ public sealed class GalacticBinarySimulation : ISimulatedSourceClass
         double fddot = t.GetDouble(GalacticBinaryParameters.SecondFrequencyDerivativeColumn, 0.0);
         if (!double.IsFinite(fddot)) throw t.Invalid(GalacticBinaryParameters.SecondFrequencyDerivativeColumn, "must be finite");
         t.RejectUnknownKeys(["id", .. GalacticBinaryParameters.ColumnNames, GalacticBinaryParameters.SecondFrequencyDerivativeColumn]);
-        return (id, new GalacticBinaryParameters(f0, fdot, amp, beta, lambda, iota, psi, phi0, fddot));
+        return (id, new GalacticBinaryParameters(f0, fdot, amplitude, beta, lambda, iota, psi, phi0, fddot));
     }
 
     private sealed class Injection(GalacticPopulationSettings? population, IReadOnlyList<(string Id, GalacticBinaryParameters Parameters)> explicitBinaries)
@@ -98,7 +98,7 @@ public sealed class GalacticBinarySimulation : ISimulatedSourceClass
                     id = {TomlText.String(id)}
                     f0_hz = {TomlText.Number(b.FrequencyHz)}
                     fdot_hz_s = {TomlText.Number(b.FrequencyDerivativeHzS)}
-                    amp = {TomlText.Number(b.Amplitude)}
+                    amplitude = {TomlText.Number(b.Amplitude)}
                     beta_rad = {TomlText.Number(b.EclipticLatitudeRad)}
                     lambda_rad = {TomlText.Number(b.EclipticLongitudeRad)}
                     iota_rad = {TomlText.Number(b.InclinationRad)}

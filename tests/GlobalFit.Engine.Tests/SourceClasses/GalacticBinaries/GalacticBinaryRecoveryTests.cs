@@ -84,7 +84,7 @@ public class GalacticBinaryRecoveryTests(ITestOutputHelper output)
             MinFrequencyHz = 1e-3,
             MaxFrequencyHz = 4e-3,
             WindowBins = 256,
-            PaddingBins = 32,
+            MarginBins = 32,
             MaxSourcesPerWindow = 10,
             TemperatureCount = 4,
             MaxTemperature = 50,

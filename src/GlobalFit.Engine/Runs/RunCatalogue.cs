@@ -36,8 +36,12 @@ public static class RunCatalogue
         return records;
     }
 
-    // The noise model of the newest checkpoint: its noise worker restored (or fresh when it never ran).
-    private static IPsdSource FinalNoise(RunPlan plan, RunFolderLayout layout, Action<string> warn)
+    /// <summary>The noise model of the newest checkpoint: its noise worker restored (or fresh when it never ran).</summary>
+    /// <param name="plan">The run's plan.</param>
+    /// <param name="layout">The run folder.</param>
+    /// <param name="warn">Receives a message when the newest checkpoint is damaged and the previous one is used.</param>
+    /// <exception cref="InvalidInputException">The run has no checkpoint yet.</exception>
+    public static IPsdSource FinalNoise(RunPlan plan, RunFolderLayout layout, Action<string> warn)
     {
         if (!CheckpointFile.Exists(layout.Root))
             throw new InvalidInputException(layout.Root, null, "the run has no checkpoint yet, so there is no noise model to build the catalogue with");

@@ -66,7 +66,7 @@ internal static class SmallFitRecord
         seed = 99
         iterations = {{iterations}}
         burn_in = {{iterations / 2}}
-        checkpoint_every = {{checkpointEvery}}
+        checkpoint_every_iterations = {{checkpointEvery}}
         threads = {{threads}}
         [galactic_binaries]
         f_min_hz = 2.95e-3
@@ -81,6 +81,5 @@ internal static class SmallFitRecord
         fstat_longitude_cells = 8
         [noise]
         steps_per_update = 30
-        foreground_fit_years = 1
         """;
 }

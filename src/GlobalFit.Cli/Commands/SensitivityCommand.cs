@@ -15,7 +15,7 @@ public static class SensitivityCommand
     /// <summary>Builds the command.</summary>
     public static Command Create(CliContext context)
     {
-        var years = new Option<double?>("--years") { Description = "Observation time in years for the confusion foreground fit (0.5, 1, 2 or 4); omit for instrument noise only" };
+        var years = new Option<double?>("--foreground-fit-years") { Description = "Observation time in years for the confusion foreground fit (0.5, 1, 2 or 4); omit for instrument noise only" };
         var output = new Option<string>("--out") { Description = "CSV file to write", Required = true };
         var png = new Option<string?>("--png") { Description = "Also draw the curve into this PNG file" };
         var fMin = new Option<double>("--f-min") { Description = "Lowest frequency, Hz", DefaultValueFactory = _ => 1e-5 };
@@ -45,7 +45,7 @@ public static class SensitivityCommand
         if (r.Years is double y)
         {
             if (!GalacticConfusionSettings.SupportedObservationYears.Contains(y))
-                throw new InvalidInputException("--years", null, $"the published foreground fit exists for 0.5, 1, 2 and 4 years only, got {y}");
+                throw new InvalidInputException("--foreground-fit-years", null, $"the published foreground fit exists for 0.5, 1, 2 and 4 years only, got {y}");
             foreground = new GalacticConfusionSettings(y);
         }
         string csvPath = OutputPaths.CheckWritable(r.Output, r.Force, "--out");
@@ -77,7 +77,7 @@ public static class SensitivityCommand
             {
                 ["csv"] = csvPath,
                 ["png"] = pngPath,
-                ["foreground_years"] = r.Years,
+                ["foreground_fit_years"] = r.Years,
                 ["points"] = r.Points,
                 ["most_sensitive_frequency_hz"] = fBest,
                 ["most_sensitive_strain_asd"] = Math.Sqrt(sBest),

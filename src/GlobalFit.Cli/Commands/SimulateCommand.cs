@@ -51,7 +51,7 @@ public static class SimulateCommand
                 ["file"] = target,
                 ["scenario"] = scenario.Name,
                 ["seed"] = scenario.Seed,
-                ["samples_per_channel"] = data.Count,
+                ["points_per_channel"] = data.Count,
                 ["cadence_s"] = data.DtSeconds,
                 ["duration_s"] = data.Count * data.DtSeconds,
             }));
@@ -59,7 +59,7 @@ public static class SimulateCommand
         else
         {
             context.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"wrote {target}: scenario \"{scenario.Name}\", seed {scenario.Seed}, {data.Count} samples per channel at {data.DtSeconds} s ({data.Count * data.DtSeconds / 86400:F2} days)"));
+                $"wrote {target}: scenario \"{scenario.Name}\", seed {scenario.Seed}, {data.Count} points per channel at {data.DtSeconds} s ({data.Count * data.DtSeconds / 86400:F2} days)"));
         }
         return ExitCodes.Success;
     }

@@ -61,6 +61,16 @@ public sealed class FitProgressPrinter : IFitProgress
         }
     }
 
+    /// <inheritdoc />
+    public void Note(string message)
+    {
+        lock (_gate)
+        {
+            EndLine();
+            _writer.WriteLine(message);
+        }
+    }
+
     /// <summary>Ends a redrawn line left open.</summary>
     public void EndLine()
     {

@@ -108,6 +108,7 @@ public static class FitRunner
 
     private static FitData LoadData(RunPlan plan, IFitProgress progress)
     {
+        foreach (string note in plan.Classes.SelectMany(c => c.Describe())) progress.Note(note);
         var observation = ObservationFile.Read(plan.Settings.DataPath);
         var data = FitData.FromObservation(observation, plan.Settings.DataPath);
         if (data.GapSeconds > 0)

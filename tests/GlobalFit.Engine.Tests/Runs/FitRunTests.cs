@@ -84,8 +84,8 @@ public sealed class FitRunTests(SharedFitData data) : IClassFixture<SharedFitDat
         var noise = NoiseSamples.After(layout, plan.Settings.BurnIn);
         // The levels are known to ~0.1 % from ~10⁵ bins, so 3σ (σ from the stored post-burn-in samples, floored at 0.5 %
         // for the few samples a short run keeps) is a tight test; the start was 20 % away.
-        NoiseSamples.AssertWithin(noise, "acc_ae", SmallFitRecord.InjectedAccelerationAsd);
-        NoiseSamples.AssertWithin(noise, "oms_ae", SmallFitRecord.InjectedOmsAsd);
+        NoiseSamples.AssertWithin(noise, "acceleration_asd_ae_m_s2_rthz", SmallFitRecord.InjectedAccelerationAsd);
+        NoiseSamples.AssertWithin(noise, "oms_asd_ae_m_rthz", SmallFitRecord.InjectedOmsAsd);
     }
 
     [Fact]

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Globalization;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Fitting;
 
@@ -42,6 +43,13 @@ internal sealed class NoiseFitPlan : IFitSourceClassPlan
     public IClassCatalogue CreateCatalogue(IPsdSource noise, long burnInIterations, double minimumConfidence) => new NoRows();
 
     public void WriteResolved(ResolvedConfigWriter writer) => _settings.WriteResolved(writer);
+
+    public IEnumerable<string> Describe() =>
+    [
+        _settings.Foreground
+            ? string.Create(CultureInfo.InvariantCulture, $"noise model: confusion foreground of the {_settings.ForegroundFitYears}-year fit ({_settings.ForegroundFitYearsOrigin}), amplitude starting at {_settings.ForegroundAmplitude}")
+            : "noise model: no confusion foreground ([noise.foreground] enabled = false)",
+    ];
 
     private static void CheckId(string workerId)
     {

@@ -3,6 +3,8 @@ using System.Globalization;
 using System.Text;
 using GlobalFit.Cli.Console;
 using GlobalFit.Cli.Plotting;
+using GlobalFit.Engine.Configuration;
+using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Physics.Files;
 using GlobalFit.Physics.Noise;
 
@@ -23,24 +25,39 @@ public static class SensitivityCommand
         var points = new Option<int>("--points") { Description = "Number of log-spaced frequencies", DefaultValueFactory = _ => 400 };
         var force = new Option<bool>("--force") { Description = "Replace existing output files" };
         var json = new Option<bool>("--json") { Description = "Print a JSON summary instead of text" };
+        var oms = new Option<double?>("--oms-asd") { Description = $"Optical-metrology noise level, m Hz^-1/2 (default {InstrumentNoiseSettings.DefaultOmsAsd})" };
+        var acceleration = new Option<double?>("--acceleration-asd") { Description = $"Test-mass acceleration noise level, m s^-2 Hz^-1/2 (default {InstrumentNoiseSettings.DefaultAccelerationAsd})" };
+        var scenario = new Option<string?>("--scenario") { Description = "Take the noise (levels, arm length, foreground) from this scenario file" };
         var command = new Command("sensitivity", "Write the A/E/T noise PSDs and the sky-averaged sensitivity curve (the plot analysts draw first)")
         {
-            years, output, png, fMin, fMax, points, force, json,
+            years, output, png, fMin, fMax, points, force, json, oms, acceleration, scenario,
         };
         command.SetAction(parse => Run(context, new Request(
             parse.GetValue(years), parse.GetValue(output)!, parse.GetValue(png), parse.GetValue(fMin),
-            parse.GetValue(fMax), parse.GetValue(points), parse.GetValue(force), parse.GetValue(json))));
+            parse.GetValue(fMax), parse.GetValue(points), parse.GetValue(force), parse.GetValue(json),
+            parse.GetValue(oms), parse.GetValue(acceleration), parse.GetValue(scenario))));
         return command;
     }
 
-    private sealed record Request(double? Years, string Output, string? Png, double FMin, double FMax, int Points, bool Force, bool Json);
+    private sealed record Request(double? Years, string Output, string? Png, double FMin, double FMax, int Points, bool Force, bool Json,
+        double? OmsAsd, double? AccelerationAsd, string? Scenario);
 
-    private static int Run(CliContext context, Request r)
+    // The instrument and foreground: a scenario's noise, or the defaults with the levels and foreground asked for.
+    private static (InstrumentNoiseSettings Instrument, GalacticConfusionSettings? Foreground) Noise(Request r)
     {
-        if (!(r.FMin > 0) || !(r.FMax > r.FMin) || !double.IsFinite(r.FMax))
-            throw new InvalidInputException("--f-min/--f-max", null, $"need 0 < f-min < f-max, got {r.FMin} and {r.FMax}");
-        if (r.Points < 2 || r.Points > 1_000_000)
-            throw new InvalidInputException("--points", null, $"must be between 2 and 1000000, got {r.Points}");
+        if (r.Scenario is not null)
+        {
+            if (r.OmsAsd is not null || r.AccelerationAsd is not null || r.Years is not null)
+                throw new InvalidInputException("--scenario", null, "takes every noise setting from the scenario; leave out --oms-asd, --acceleration-asd and --foreground-fit-years");
+            var noise = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Load(r.Scenario)).Noise;
+            return (noise.Instrument, noise.Foreground);
+        }
+        foreach (var (name, value) in new[] { ("--oms-asd", r.OmsAsd), ("--acceleration-asd", r.AccelerationAsd) })
+            if (value is { } v && !(v > 0 && double.IsFinite(v)))
+                throw new InvalidInputException(name, null, $"must be positive and finite, got {v}");
+        var instrument = new InstrumentNoiseSettings(
+            accelerationAsd: r.AccelerationAsd ?? InstrumentNoiseSettings.DefaultAccelerationAsd,
+            omsAsd: r.OmsAsd ?? InstrumentNoiseSettings.DefaultOmsAsd);
         GalacticConfusionSettings? foreground = null;
         if (r.Years is double y)
         {
@@ -48,11 +65,21 @@ public static class SensitivityCommand
                 throw new InvalidInputException("--foreground-fit-years", null, $"the published foreground fit exists for 0.5, 1, 2 and 4 years only, got {y}");
             foreground = new GalacticConfusionSettings(y);
         }
+        return (instrument, foreground);
+    }
+
+    private static int Run(CliContext context, Request r)
+    {
+        if (!(r.FMin > 0) || !(r.FMax > r.FMin) || !double.IsFinite(r.FMax))
+            throw new InvalidInputException("--f-min/--f-max", null, $"need 0 < f-min < f-max, got {r.FMin} and {r.FMax}");
+        if (r.Points < 2 || r.Points > 1_000_000)
+            throw new InvalidInputException("--points", null, $"must be between 2 and 1000000, got {r.Points}");
+        var (instrument, foreground) = Noise(r);
         string csvPath = OutputPaths.CheckWritable(r.Output, r.Force, "--out");
         string? pngPath = r.Png is null ? null : OutputPaths.CheckWritable(r.Png, r.Force, "--png");
 
-        var noise = new AetNoiseModel(InstrumentNoiseSettings.Default, foreground);
-        var curve = new SensitivityCurve(InstrumentNoiseSettings.Default, foreground);
+        var noise = new AetNoiseModel(instrument, foreground);
+        var curve = new SensitivityCurve(instrument, foreground);
         var table = SensitivityTable.Compute(noise, curve, r.FMin, r.FMax, r.Points);
 
         AtomicFile.Write(csvPath, overwrite: true, stream => stream.Write(Encoding.UTF8.GetBytes(table.ToCsv())));
@@ -77,7 +104,9 @@ public static class SensitivityCommand
             {
                 ["csv"] = csvPath,
                 ["png"] = pngPath,
-                ["foreground_fit_years"] = r.Years,
+                ["foreground_fit_years"] = foreground?.ObservationYears,
+                ["acceleration_asd"] = instrument.AccelerationAsd,
+                ["oms_asd"] = instrument.OmsAsd,
                 ["points"] = r.Points,
                 ["most_sensitive_frequency_hz"] = fBest,
                 ["most_sensitive_strain_asd"] = Math.Sqrt(sBest),

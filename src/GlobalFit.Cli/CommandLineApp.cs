@@ -1,12 +1,13 @@
 using System.CommandLine;
 using GlobalFit.Cli.Commands;
+using GlobalFit.Cli.Console;
 using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli;
 
 /// <summary>The <c>globalfit</c> command tree and its error policy: bad input exits with
 /// <see cref="ExitCodes.BadInput"/> and a message naming the file and place; bugs exit with
-/// <see cref="ExitCodes.InternalError"/>.</summary>
+/// <see cref="ExitCodes.InternalError"/>, one line on the terminal and the stack trace in a crash log.</summary>
 public static class CommandLineApp
 {
     /// <summary>Parses <paramref name="args"/>, runs the chosen command and returns the exit code.</summary>
@@ -47,6 +48,13 @@ public static class CommandLineApp
         {
             context.Error.WriteLine("interrupted");
             return ExitCodes.Interrupted;
+        }
+        catch (Exception e)
+        {
+            // A bug: one line for the user, the stack trace in a file they can attach to a report.
+            string? log = CrashReport.Write(e, args);
+            context.Error.WriteLine($"error: internal error ({e.GetType().Name}: {e.Message}); {(log is null ? "no crash log could be written" : $"details in {log}")}");
+            return ExitCodes.InternalError;
         }
     }
 }

@@ -6,7 +6,8 @@ public static class ExitCodes
     /// <summary>The command did what was asked.</summary>
     public const int Success = 0;
 
-    /// <summary>An unexpected internal error (a bug): the message and stack trace go to standard error.</summary>
+    /// <summary>An unexpected internal error (a bug): one line on standard error names it and the crash log that holds
+    /// the stack trace.</summary>
     public const int InternalError = 1;
 
     /// <summary>Bad input: an unreadable or invalid file, option or value. Nothing was written.</summary>
@@ -14,6 +15,10 @@ public static class ExitCodes
 
     /// <summary>A fit stopped because a worker failed repeatedly; its last complete iteration is checkpointed.</summary>
     public const int FitFailed = 3;
+
+    /// <summary>A fit stopped because a checkpoint or an iteration's samples could not be written (disk full, permission
+    /// lost, I/O error); the last good checkpoint is kept and the message names the file and the cause.</summary>
+    public const int WriteFailed = 4;
 
     /// <summary>Interrupted by the user (Ctrl-C).</summary>
     public const int Interrupted = 130;

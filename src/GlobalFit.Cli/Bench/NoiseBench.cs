@@ -1,6 +1,5 @@
-using GlobalFit.Physics.Noise;
-
 using GlobalFit.Engine.Benchmarking;
+using GlobalFit.Physics.Noise;
 
 namespace GlobalFit.Cli.Bench;
 

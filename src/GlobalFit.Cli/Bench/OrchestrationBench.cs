@@ -1,6 +1,5 @@
-using GlobalFit.Engine.Fitting;
-
 using GlobalFit.Engine.Benchmarking;
+using GlobalFit.Engine.Fitting;
 
 namespace GlobalFit.Cli.Bench;
 

@@ -1,6 +1,5 @@
-using GlobalFit.Inference.Performance;
-
 using GlobalFit.Engine.Benchmarking;
+using GlobalFit.Inference.Performance;
 
 namespace GlobalFit.Cli.Bench;
 

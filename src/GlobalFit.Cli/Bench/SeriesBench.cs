@@ -1,7 +1,6 @@
 using System.Numerics;
-using GlobalFit.Physics.Series;
-
 using GlobalFit.Engine.Benchmarking;
+using GlobalFit.Physics.Series;
 
 namespace GlobalFit.Cli.Bench;
 

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using GlobalFit.Engine.Catalogue;
 using GlobalFit.Engine.Runs;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Commands;

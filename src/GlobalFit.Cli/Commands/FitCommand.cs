@@ -1,8 +1,7 @@
 using System.CommandLine;
 using GlobalFit.Cli.Console;
-using GlobalFit.Engine.Runs;
-
 using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.Runs;
 
 namespace GlobalFit.Cli.Commands;
 
@@ -52,6 +51,10 @@ public static class FitCommand
             case FitOutcomeKind.Interrupted:
                 context.Error.WriteLine($"interrupted after {outcome.IterationsCompleted} iterations; checkpoint at iteration {outcome.CheckpointIteration}; continue with 'globalfit resume RUN'");
                 return ExitCodes.Interrupted;
+            case FitOutcomeKind.WriteFailed:
+                context.Error.WriteLine($"error: the fit stopped: {outcome.Message}");
+                context.Error.WriteLine($"the last good checkpoint (iteration {outcome.CheckpointIteration}) is kept; free space or fix the permissions and run 'globalfit resume RUN'");
+                return ExitCodes.WriteFailed;
             default:
                 context.Error.WriteLine($"error: the fit stopped: {outcome.Message}");
                 context.Error.WriteLine($"the last complete iteration ({outcome.CheckpointIteration}) is checkpointed; fix the cause and run 'globalfit resume RUN'");

@@ -3,10 +3,9 @@ using System.Globalization;
 using GlobalFit.Cli.Console;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
+using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.DataFiles;
-
-using GlobalFit.Engine.SourceClasses;
 
 namespace GlobalFit.Cli.Commands;
 

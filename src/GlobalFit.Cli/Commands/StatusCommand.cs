@@ -2,8 +2,8 @@ using System.Collections.Immutable;
 using System.CommandLine;
 using System.Globalization;
 using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Runs;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Commands;

@@ -1,8 +1,7 @@
 using System.Diagnostics;
 using System.Globalization;
-using GlobalFit.Engine.Runs;
-
 using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.Runs;
 
 namespace GlobalFit.Cli.Console;
 

@@ -1,10 +1,11 @@
 using Akka.Actor;
 using GlobalFit.Engine.Checkpoints;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Actors;
 
 /// <summary>Writes checkpoints atomically into the run folder. A failed write (full disk, permissions) is reported,
-/// not thrown: the previous checkpoint stays intact and the coordinator decides what to do.</summary>
+/// not thrown: the previous checkpoint stays intact, the temporary file is removed, and the coordinator stops the run.</summary>
 public sealed class CheckpointerActor : ReceiveActor
 {
     /// <summary>Creates the actor for <paramref name="runFolder"/>.</summary>
@@ -17,7 +18,7 @@ public sealed class CheckpointerActor : ReceiveActor
             {
                 CheckpointFile.Write(runFolder, m.Checkpoint);
             }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException or InvalidInputException)
             {
                 problem = e.Message;
             }

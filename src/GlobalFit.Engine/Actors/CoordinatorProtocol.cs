@@ -1,6 +1,5 @@
 using GlobalFit.Engine.Orchestration;
 
-
 namespace GlobalFit.Engine.Actors;
 
 /// <summary>Starts the fit; the coordinator answers the sender with <see cref="FitFinished"/>.</summary>

@@ -36,7 +36,11 @@ public sealed class FitCoordinator : ReceiveActor, IStageHost
         Receive<WorkerUpdated>(m => _machine.OnUpdated(m.WorkerId, m.Result));
         Receive<HandoversAccepted>(m => _machine.OnAdopted(m.WorkerId, m.Result));
         Receive<StageCommitted>(_ => _machine.OnCommitted());
-        Receive<SamplesAppended>(m => _machine.OnAppended(m.Iteration));
+        Receive<SamplesAppended>(m =>
+        {
+            if (m.Problem is null) _machine.OnAppended(m.Iteration);
+            else _machine.OnAppendFailed(m.Iteration, m.Problem);
+        });
         Receive<CheckpointWritten>(m => _machine.OnCheckpointWritten(m.Iteration, m.Problem));
         Receive<WorkerFailed>(m => _machine.OnWorkerFailed(m.WorkerId, m.Error));
     }

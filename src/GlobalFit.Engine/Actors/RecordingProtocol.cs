@@ -8,9 +8,10 @@ namespace GlobalFit.Engine.Actors;
 /// <param name="Blocks">Every worker's block, by ordinal worker id.</param>
 public sealed record AppendSamples(long Iteration, IReadOnlyList<SampleBlock> Blocks);
 
-/// <summary>The store's acknowledgement: the iteration's samples are on disk.</summary>
+/// <summary>The store's answer: the iteration's samples are on disk, or could not be written.</summary>
 /// <param name="Iteration">The iteration.</param>
-public sealed record SamplesAppended(long Iteration);
+/// <param name="Problem">Null when written; otherwise the file and the cause.</param>
+public sealed record SamplesAppended(long Iteration, string? Problem = null);
 
 /// <summary>Writes a checkpoint.</summary>
 /// <param name="Checkpoint">The state.</param>

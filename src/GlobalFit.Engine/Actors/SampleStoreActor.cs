@@ -1,10 +1,11 @@
 using Akka.Actor;
 using GlobalFit.Engine.Samples;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Actors;
 
 /// <summary>Appends each iteration's samples to the run's <see cref="SampleStore"/> (append-only, checksummed,
-/// flushed to disk before the acknowledgement).</summary>
+/// flushed to disk before the acknowledgement). A failed write is answered with its cause, not thrown.</summary>
 public sealed class SampleStoreActor : ReceiveActor
 {
     /// <summary>Creates the actor around <paramref name="store"/>.</summary>
@@ -12,8 +13,17 @@ public sealed class SampleStoreActor : ReceiveActor
     {
         Receive<AppendSamples>(m =>
         {
-            store.Append(m.Blocks);
-            Sender.Tell(new SamplesAppended(m.Iteration));
+            string? problem = null;
+            try
+            {
+                store.Append(m.Blocks);
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException or InvalidInputException)
+            {
+                // Answered, never thrown: a crashed store would leave the coordinator waiting for ever.
+                problem = e.Message;
+            }
+            Sender.Tell(new SamplesAppended(m.Iteration, problem));
         });
     }
 

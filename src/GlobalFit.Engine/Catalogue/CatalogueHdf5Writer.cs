@@ -1,7 +1,7 @@
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Physics.Files;
-using PureHDF;
 using L = GlobalFit.Engine.Catalogue.CatalogueHdf5Layout;
+using PureHDF;
 
 namespace GlobalFit.Engine.Catalogue;
 

@@ -37,6 +37,35 @@ public static class CheckpointFile
         ArgumentNullException.ThrowIfNull(checkpoint);
         Directory.CreateDirectory(Folder(runFolder));
         string temporary = Path.Combine(Folder(runFolder), "latest.tmp");
+        try
+        {
+            WriteTemporary(temporary, checkpoint);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            // The previous checkpoints stay as they were; a half-written temporary file is not left behind.
+            TryDelete(temporary);
+            throw new IOException($"{temporary} cannot be written: {FileProblem.Describe(temporary, e)}", e);
+        }
+        string latest = LatestPath(runFolder);
+        if (File.Exists(latest)) File.Move(latest, PreviousPath(runFolder), overwrite: true);
+        File.Move(temporary, latest);
+    }
+
+    private static void TryDelete(string path)
+    {
+        try
+        {
+            if (File.Exists(path)) File.Delete(path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            // Nothing more can be done here; the write error that brought us here is what gets reported.
+        }
+    }
+
+    private static void WriteTemporary(string temporary, RunCheckpoint checkpoint)
+    {
         using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
         {
             // The payload is serialised straight to the file behind a placeholder header, which is filled in once its
@@ -58,25 +87,26 @@ public static class CheckpointFile
             stream.Write(header);
             stream.Flush(flushToDisk: true);
         }
-        string latest = LatestPath(runFolder);
-        if (File.Exists(latest)) File.Move(latest, PreviousPath(runFolder), overwrite: true);
-        File.Move(temporary, latest);
     }
 
     /// <summary>True when the run folder holds at least one checkpoint file.</summary>
     public static bool Exists(string runFolder) => File.Exists(LatestPath(runFolder)) || File.Exists(PreviousPath(runFolder));
 
-    /// <summary>Reads the newest intact checkpoint.</summary>
+    /// <summary>Reads the newest intact checkpoint of this run.</summary>
     /// <param name="runFolder">The run folder.</param>
-    /// <param name="warn">Receives a message when the latest checkpoint is damaged and the previous one is used.</param>
-    /// <exception cref="InvalidInputException">No intact checkpoint exists; the message names both files and what is wrong.</exception>
-    public static RunCheckpoint Read(string runFolder, Action<string> warn)
+    /// <param name="warn">Receives a message when the latest checkpoint is damaged or belongs to another run and the
+    /// previous one is used.</param>
+    /// <param name="configDigest">The digest of the run's resolved configuration; a checkpoint written under another is
+    /// another run's and is not used. Null accepts any.</param>
+    /// <exception cref="InvalidInputException">No intact checkpoint of this run exists; the message names both files and
+    /// what is wrong with each.</exception>
+    public static RunCheckpoint Read(string runFolder, Action<string> warn, string? configDigest = null)
     {
         ArgumentNullException.ThrowIfNull(warn);
         string latest = LatestPath(runFolder), previous = PreviousPath(runFolder);
-        string? latestProblem = TryRead(latest, out var checkpoint);
+        string? latestProblem = TryRead(latest, configDigest, out var checkpoint);
         if (latestProblem is null) return checkpoint!;
-        string? previousProblem = TryRead(previous, out checkpoint);
+        string? previousProblem = TryRead(previous, configDigest, out checkpoint);
         if (previousProblem is null)
         {
             warn($"checkpoint {latest} is unusable ({latestProblem}); continuing from the previous one, {previous} (iteration {checkpoint!.Iteration})");
@@ -85,7 +115,7 @@ public static class CheckpointFile
         throw new InvalidInputException(latest, null, $"no usable checkpoint: {latestProblem}; {previous}: {previousProblem}");
     }
 
-    private static string? TryRead(string path, out RunCheckpoint? checkpoint)
+    private static string? TryRead(string path, string? configDigest, out RunCheckpoint? checkpoint)
     {
         checkpoint = null;
         if (!File.Exists(path)) return "file missing";
@@ -107,6 +137,8 @@ public static class CheckpointFile
         }
         if (checkpoint.FormatVersion != RunCheckpoint.CurrentFormatVersion)
             return $"format version {checkpoint.FormatVersion}, this build reads {RunCheckpoint.CurrentFormatVersion}";
+        if (configDigest is not null && checkpoint.ConfigDigest != configDigest)
+            return "it belongs to another run (written under another run.toml; was run.toml edited, or the file copied from another run?)";
         return null;
     }
 }

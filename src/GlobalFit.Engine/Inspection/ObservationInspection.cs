@@ -1,9 +1,8 @@
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
+using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Noise;
-
-using GlobalFit.Engine.SourceClasses;
 
 namespace GlobalFit.Engine.Inspection;
 

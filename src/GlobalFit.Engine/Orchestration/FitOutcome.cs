@@ -25,4 +25,23 @@ public enum FitOutcomeKind
 
     /// <summary>A worker failed repeatedly; resumable from the last checkpoint once the cause is fixed.</summary>
     Failed,
+
+    /// <summary>A checkpoint or the samples of an iteration could not be written (disk full, permission lost, I/O
+    /// error); the last good checkpoint is kept and the run is resumable once the cause is fixed.</summary>
+    WriteFailed,
+}
+
+/// <summary>The words <c>status</c> and <c>status.json</c> use for how a fit ended.</summary>
+public static class FitOutcomeNames
+{
+    /// <summary>The state name of <paramref name="kind"/>: <c>completed</c>, <c>interrupted</c>, <c>failed</c> or
+    /// <c>stopped (error)</c>.</summary>
+    public static string StateName(this FitOutcomeKind kind) => kind switch
+    {
+        FitOutcomeKind.Completed => "completed",
+        FitOutcomeKind.Interrupted => "interrupted",
+        FitOutcomeKind.Failed => "failed",
+        FitOutcomeKind.WriteFailed => "stopped (error)",
+        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "unknown outcome"),
+    };
 }

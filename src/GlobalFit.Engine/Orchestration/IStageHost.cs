@@ -22,7 +22,8 @@ public interface IStageHost
     /// noise); answered by <see cref="StageMachine.OnCommitted"/>.</summary>
     void CommitStage(IReadOnlyList<KeyValuePair<string, WindowSpectra>> templates, InversePsd? psd);
 
-    /// <summary>Append an iteration's samples (by ordinal worker id); answered by <see cref="StageMachine.OnAppended"/>.</summary>
+    /// <summary>Append an iteration's samples (by ordinal worker id); answered by <see cref="StageMachine.OnAppended"/> or
+    /// <see cref="StageMachine.OnAppendFailed"/>.</summary>
     void AppendSamples(long iteration, IReadOnlyList<SampleBlock> blocks);
 
     /// <summary>Write a checkpoint; answered by <see cref="StageMachine.OnCheckpointWritten"/>.</summary>

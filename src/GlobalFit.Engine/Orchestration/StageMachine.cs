@@ -39,6 +39,7 @@ public sealed class StageMachine
     private long _checkpointIteration;
     private long _current;
     private int _stageIndex;
+    private bool _started;
     private bool _stopRequested;
     private bool _finished;
     private long _iterationStarted;
@@ -76,9 +77,10 @@ public sealed class StageMachine
     /// <summary>Whether the run is over (<see cref="IStageHost.Finished"/> was called).</summary>
     public bool IsFinished => _finished;
 
-    /// <summary>Loads every worker and starts the first iteration.</summary>
+    /// <summary>Loads every worker and starts the first iteration (or, when a stop was requested before, finishes).</summary>
     public void Start()
     {
+        _started = true;
         foreach (var (id, state) in _committed) _host.LoadWorker(id, state);
         BeginIteration();
     }
@@ -124,19 +126,28 @@ public sealed class StageMachine
         else BeginIteration();
     }
 
-    /// <summary>A checkpoint write ended; <paramref name="problem"/> is null when it succeeded.</summary>
+    /// <summary>The iteration's samples could not be written: the run stops at once, with the last good checkpoint kept
+    /// (a resume cuts the store back to it).</summary>
+    /// <param name="iteration">The iteration whose samples were being appended.</param>
+    /// <param name="problem">The file and the cause.</param>
+    public void OnAppendFailed(long iteration, string problem)
+    {
+        if (_finished || !_pending.Complete(PendingStep.Append)) return;
+        Finish(FitOutcomeKind.WriteFailed, $"the samples of iteration {iteration} could not be written: {problem}");
+    }
+
+    /// <summary>A checkpoint write ended; <paramref name="problem"/> is null when it succeeded. A failed write stops the
+    /// run: the previous checkpoint is intact, and going on would only pile up work no checkpoint keeps.</summary>
     public void OnCheckpointWritten(long iteration, string? problem)
     {
         if (_finished || !_pending.Complete(PendingStep.Checkpoint)) return;
-        if (problem is null)
+        if (problem is not null)
         {
-            _checkpointIteration = iteration;
-            _lastCheckpoint = _time.GetTimestamp();
+            Finish(FitOutcomeKind.WriteFailed, $"the checkpoint of iteration {iteration} could not be written: {problem}");
+            return;
         }
-        else
-        {
-            _host.Warning($"checkpoint of iteration {iteration} failed ({problem}); the previous checkpoint (iteration {_checkpointIteration}) is intact");
-        }
+        _checkpointIteration = iteration;
+        _lastCheckpoint = _time.GetTimestamp();
         if (_pendingFinish is { } finish) { Finish(finish.Kind, finish.Message); return; }
         BeginIteration();
     }
@@ -167,6 +178,7 @@ public sealed class StageMachine
     {
         if (_finished || _pendingFinish is not null) return;
         _stopRequested = true;
+        if (!_started) return; // a signal that came while the data were loading: the start finishes at once
         // Between iterations (appending or checkpointing) the flag is seen at the next iteration; mid-stage the stage is
         // abandoned, since the last complete iteration is already a consistent state.
         if (_pending.Step is PendingStep.Append or PendingStep.Checkpoint) return;

@@ -4,14 +4,13 @@ using System.Text;
 using Akka.Actor;
 using GlobalFit.Engine.Actors;
 using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Telemetry;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Files;
-
-using GlobalFit.Engine.Orchestration;
 
 namespace GlobalFit.Engine.Runs;
 
@@ -29,16 +28,29 @@ public static partial class FitRunner
         ArgumentNullException.ThrowIfNull(options);
         var plan = RunPlan.Load(configPath, options.Registry);
         var layout = new RunFolderLayout(plan.Settings.RunFolder);
-        if (File.Exists(layout.ResolvedConfig))
-            throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} holds another run; continue it with 'globalfit resume {layout.Root}' or choose another run_folder");
-        if (Directory.Exists(layout.Root) && Directory.EnumerateFileSystemEntries(layout.Root).Any())
-            throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} is not empty; choose a new or empty folder");
+        CheckRunFolderIsFree(configPath, layout);
+        // Everything that can be wrong with the data is found before the run folder is touched, so a refused fit leaves
+        // nothing behind that would block a retry.
+        var data = LoadData(plan, options.Progress);
+        bool unstarted = layout.HoldsUnstartedRun();
         Directory.CreateDirectory(layout.Root);
         using var runLock = RunLock.Acquire(layout);
+        if (unstarted) layout.ClearUnstartedRun();
         string resolved = plan.ResolvedToml();
         AtomicFile.Write(layout.ResolvedConfig, overwrite: false, s => s.Write(Encoding.UTF8.GetBytes(resolved)));
-        var data = LoadData(plan, options.Progress);
         return Run(plan, layout, Digest(resolved), data, FitPosition.Fresh(plan.Workers), options);
+    }
+
+    // A fresh fit needs a new or empty folder, or one whose earlier fit never completed an iteration (nothing to lose).
+    private static void CheckRunFolderIsFree(string configPath, RunFolderLayout layout)
+    {
+        if (File.Exists(layout.Root))
+            throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} is a file, not a folder");
+        if (!Directory.Exists(layout.Root) || layout.HoldsUnstartedRun()) return;
+        if (File.Exists(layout.ResolvedConfig))
+            throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} holds another run; continue it with 'globalfit resume {layout.Root}' or choose another run_folder");
+        if (Directory.EnumerateFileSystemEntries(layout.Root).Any())
+            throw new InvalidInputException(configPath, "key 'run_folder'", $"{layout.Root} is not empty; choose a new or empty folder");
     }
 
     /// <summary>Continues a stopped fit from its newest intact checkpoint (or from the start when it never wrote one).</summary>
@@ -71,10 +83,13 @@ public static partial class FitRunner
         var store = new SampleStore(layout.Root);
         if (CheckpointFile.Exists(layout.Root))
         {
-            var checkpoint = CheckpointFile.Read(layout.Root, options.Progress.Warning);
-            if (checkpoint.ConfigDigest != digest)
-                throw new InvalidInputException(layout.ResolvedConfig, null, "run.toml was edited after the checkpoint was written; restore it or start a new fit");
-            start = FitPosition.From(checkpoint);
+            start = FitPosition.From(CheckpointFile.Read(layout.Root, options.Progress.Warning, digest));
+            // Samples of iterations up to the checkpoint must all be in the store: resuming past a gap would leave it
+            // out of the catalogue without a word.
+            long committed = store.CommittedIteration;
+            if (committed < start.Iteration)
+                throw new InvalidInputException(store.SamplesFolder, null,
+                    $"holds the samples of iterations 1…{committed} only, but the checkpoint is at iteration {start.Iteration}: the samples of iterations {committed + 1}…{start.Iteration} are lost");
         }
         else
         {
@@ -112,7 +127,7 @@ public static partial class FitRunner
         var finished = coordinator.Ask<FitFinished>(new StartFit(), Timeout.InfiniteTimeSpan).GetAwaiter().GetResult();
         system.Terminate().Wait(TimeSpan.FromSeconds(10));
         var outcome = finished.Outcome;
-        progress.WriteState(outcome.Kind.ToString().ToLowerInvariant(), outcome.IterationsCompleted, settings.Iterations, outcome.Message, outcome.CheckpointIteration);
+        progress.WriteState(outcome.Kind.StateName(), outcome.IterationsCompleted, settings.Iterations, outcome.Message, outcome.CheckpointIteration);
         return outcome.Kind == FitOutcomeKind.Completed
             ? outcome with { Catalogue = RunCatalogue.Export(plan, layout, options.Progress.Warning) }
             : outcome;

@@ -1,13 +1,13 @@
 using System.Collections.Immutable;
 using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Checkpoints;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Runs;
 
-/// <summary>Builds a run's catalogue from its catalogue store: every class's entries from the samples after burn-in,
+/// <summary>Builds a run's catalogue from its catalogue store: every class's sources from the samples after burn-in,
 /// with SNRs and overlaps weighted by the noise model of the newest checkpoint.</summary>
 public static class RunCatalogue
 {

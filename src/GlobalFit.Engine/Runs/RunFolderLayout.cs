@@ -15,6 +15,21 @@ public sealed record RunFolderLayout(string Root)
         return layout;
     }
 
+    /// <summary>Whether the folder holds a fit that never completed an iteration: a run.toml, but no checkpoint and no
+    /// committed samples, and no process holding its lock. Such a folder holds nothing worth keeping.</summary>
+    public bool HoldsUnstartedRun() =>
+        File.Exists(ResolvedConfig) && !Checkpoints.CheckpointFile.Exists(Root)
+        && new Samples.SampleStore(Root).CommittedIteration == 0 && !RunLock.IsHeld(this);
+
+    /// <summary>Removes the files a fit that never completed an iteration leaves (and nothing else).</summary>
+    public void ClearUnstartedRun()
+    {
+        foreach (string file in new[] { ResolvedConfig, StatusFile, TelemetryFile })
+            if (File.Exists(file)) File.Delete(file);
+        foreach (string folder in new[] { Path.Combine(Root, Samples.SampleStore.SamplesFolderName), Checkpoints.CheckpointFile.Folder(Root) })
+            if (Directory.Exists(folder)) Directory.Delete(folder, recursive: true);
+    }
+
     /// <summary>The resolved configuration.</summary>
     public string ResolvedConfig => Path.Combine(Root, "run.toml");
 

@@ -87,9 +87,6 @@ public sealed class RunPlan
     {
         ArgumentNullException.ThrowIfNull(root);
         registry ??= SourceClassRegistry.Default;
-        foreach (string planned in SourceClassRegistry.Planned)
-            if (root.Has(planned))
-                throw root.Invalid(planned, $"source class '{planned}' has no implementation in this build yet; remove the section (implemented: {string.Join(", ", registry.Ids)})");
         var settings = RunSettings.FromConfig(root, configFolder, requireData: knownShape is null);
         var shape = knownShape ?? ReadShape(settings.DataPath);
         var classes = new List<IFitSourceClassPlan>();

@@ -41,7 +41,7 @@ public sealed record RunSettings
     /// <summary>Failures of one worker within one iteration after which the run stops [<c>max_worker_failures</c>].</summary>
     public int MaxWorkerFailures { get; init; } = 3;
 
-    /// <summary>Catalogue entries present in fewer than this fraction of the samples are left out [<c>min_confidence</c>].</summary>
+    /// <summary>Catalogue sources present in fewer than this fraction of the samples are left out [<c>min_confidence</c>].</summary>
     public double MinConfidence { get; init; } = 0.5;
 
     /// <summary>Reads the top-level keys of <paramref name="root"/>.</summary>

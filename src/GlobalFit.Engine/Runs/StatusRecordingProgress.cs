@@ -1,5 +1,4 @@
 using System.Collections.Immutable;
-
 using GlobalFit.Engine.Orchestration;
 
 namespace GlobalFit.Engine.Runs;

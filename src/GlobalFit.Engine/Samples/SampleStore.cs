@@ -3,7 +3,7 @@ using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Samples;
 
-/// <summary>The append-only sample store of a run: one checksummed chain file per worker in <c>RUN/samples/</c>, plus a
+/// <summary>The append-only sample store of a run: one checksummed sample file per worker in <c>RUN/samples/</c>, plus a
 /// commit point naming the last iteration whose samples are all on disk (layout in Catalogue/LAYOUT.md).</summary>
 /// <remarks>
 /// <para>An iteration is committed in two steps: its records are appended to the workers' files and flushed to disk,
@@ -15,7 +15,7 @@ namespace GlobalFit.Engine.Samples;
 /// </remarks>
 public sealed class SampleStore
 {
-    /// <summary>Name of the folder inside the run folder that holds the chain files.</summary>
+    /// <summary>Name of the folder inside the run folder that holds the sample files.</summary>
     public const string SamplesFolderName = "samples";
 
     /// <summary>Opens the store of <paramref name="runFolder"/>; nothing is created until the first append.</summary>
@@ -30,7 +30,7 @@ public sealed class SampleStore
     /// <summary>The run folder.</summary>
     public string RunFolder { get; }
 
-    /// <summary>The folder holding the chain files.</summary>
+    /// <summary>The folder holding the sample files.</summary>
     public string SamplesFolder { get; }
 
     /// <summary>The last committed iteration (0 when nothing was committed).</summary>
@@ -42,7 +42,7 @@ public sealed class SampleStore
     /// <see cref="CommittedIteration"/>. An empty list does nothing.</param>
     /// <exception cref="ArgumentException">The blocks are of different iterations, of an iteration already committed, repeat a
     /// worker, or are inconsistent (value count not matching the sources and parameters).</exception>
-    /// <exception cref="InvalidInputException">The run folder is missing or a chain file is shorter than its commit point.</exception>
+    /// <exception cref="InvalidInputException">The run folder is missing or a sample file is shorter than its commit point.</exception>
     public void Append(IReadOnlyList<SampleBlock> blocks)
     {
         ArgumentNullException.ThrowIfNull(blocks);
@@ -50,7 +50,13 @@ public sealed class SampleStore
         if (!Directory.Exists(RunFolder)) throw new InvalidInputException(RunFolder, null, "run folder does not exist");
         var manifest = CommitManifest.Load(SamplesFolder);
         long iteration = CheckIteration(blocks, manifest.Iteration);
-        Directory.CreateDirectory(SamplesFolder);
+        if (!Directory.Exists(SamplesFolder))
+        {
+            // The commit record exists before any sample file does, so a record missing beside sample files is a loss
+            // (reported by every reader), never the state of a store that has not committed yet.
+            Directory.CreateDirectory(SamplesFolder);
+            CommitManifest.Empty.Save(SamplesFolder);
+        }
 
         var lengths = new Dictionary<string, long>(manifest.Lengths, StringComparer.Ordinal);
         foreach (var block in blocks.OrderBy(b => b.WorkerId, StringComparer.Ordinal))
@@ -185,7 +191,7 @@ public sealed class SampleStore
         {
             string fileName = Path.GetFileName(path);
             string workerId = WorkerFileName.ToWorkerId(fileName)
-                ?? throw new InvalidInputException(path, null, "is not a chain file name globalfit writes; move it out of the samples folder");
+                ?? throw new InvalidInputException(path, null, "is not a sample file name globalfit writes; move it out of the samples folder");
             files.Add((workerId, fileName));
         }
         return files.OrderBy(f => f.Item1, StringComparer.Ordinal);
@@ -237,9 +243,9 @@ public sealed class SampleStore
             stream.Flush(flushToDisk: true);
             return committedLength + record.Length;
         }
-        catch (IOException e)
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            throw new InvalidInputException(path, null, $"cannot be appended to: {e.Message}", e);
+            throw new InvalidInputException(path, null, $"cannot be appended to: {FileProblem.Describe(path, e)}", e);
         }
     }
 

@@ -1,6 +1,8 @@
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
+using GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
+using GlobalFit.Engine.SourceClasses.MassiveBlackHoleBinaries;
 using GlobalFit.Engine.SourceClasses.Noise;
 
 namespace GlobalFit.Engine.SourceClasses;
@@ -12,11 +14,8 @@ namespace GlobalFit.Engine.SourceClasses;
 public sealed record SourceClassRegistry(IReadOnlyList<ISourceClass> Classes)
 {
     /// <summary>What this build implements: the one registration list.</summary>
-    public static SourceClassRegistry Default { get; } = new([new GalacticBinaryClass(), new NoiseClass()]);
-
-    /// <summary>Class ids the project names (see the design's "Names") whose module is not built yet; a configuration
-    /// that asks for one is refused with that reason rather than as an unknown section.</summary>
-    public static IReadOnlyList<string> Planned { get; } = ["massive_black_hole_binaries", "extreme_mass_ratio_inspirals"];
+    public static SourceClassRegistry Default { get; } =
+        new([new GalacticBinaryClass(), new MassiveBlackHoleBinaryClass(), new ExtremeMassRatioInspiralClass(), new NoiseClass()]);
 
     /// <summary>The module with id <paramref name="id"/>, or null.</summary>
     public ISourceClass? Find(string id) => Classes.FirstOrDefault(c => c.Id == id);

@@ -27,10 +27,11 @@ public static class SamplerOverheadProbe
         ArgumentOutOfRangeException.ThrowIfLessThan(dimension, 1);
         SpinLikelihoodModel model = Calibrate(dimension, likelihoodMicroseconds);
         var sampler = new ParallelTemperingSampler<SpinLikelihoodModel>(model, new ParallelTemperingSettings { Seed = 1 });
-        // Warm up for at least half a second so that tiered compilation has promoted the sampler's loop and
-        // the adaptation has settled.
+        // Warm up for at least half a second and 20 000 steps so that tiered compilation has promoted the sampler's
+        // loop (its promotion allocates, and on a loaded machine half a second may hold too few steps for it) and the
+        // adaptation has settled.
         long warmUpStart = Stopwatch.GetTimestamp();
-        while (Stopwatch.GetElapsedTime(warmUpStart).TotalSeconds < 0.5)
+        for (int warmUpSteps = 0; warmUpSteps < 20_000 || Stopwatch.GetElapsedTime(warmUpStart).TotalSeconds < 0.5; warmUpSteps += 1_000)
         {
             sampler.Advance(1_000);
         }

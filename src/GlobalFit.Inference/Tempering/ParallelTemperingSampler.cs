@@ -28,26 +28,14 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
     where TModel : ITargetModel
 {
     private const int MaximumInitialDraws = 10_000;
-    private const ulong SwapStreamId = ulong.MaxValue;
 
     private readonly TModel _model;
     private readonly ParameterSchema _schema;
-    private readonly ParallelTemperingSettings _settings;
     private readonly int _dimension;
-    private readonly int _replicas;
-    private readonly int _chainCount;
-    private readonly TemperatureLadder _ladder;
-    private readonly ProposalMixture[] _mixtures;
-    private readonly ChainTemperature[] _temperatures;
+    private readonly TemperedChains _chains;
     private readonly double[] _positions;
-    private readonly double[] _logLikelihoods;
-    private readonly double[] _logPriors;
-    private readonly RandomStream[] _random;
     private readonly double[] _candidate;
     private readonly double[] _swapBuffer;
-    private readonly int[] _acceptedPerPair;
-    private readonly EvidenceAccumulator _evidence;
-    private RandomStream _swapRandom;
 
     /// <summary>Creates a sampler with every chain started from a prior draw with finite likelihood.</summary>
     /// <param name="model">The model.</param>
@@ -61,31 +49,14 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
         settings.Validate();
         _model = model;
         _schema = model.Schema ?? throw new ArgumentException("Model schema must not be null.", nameof(model));
-        _settings = settings;
         _dimension = _schema.Dimension;
-        _replicas = settings.Tempering.ChainsPerTemperature;
-        _chainCount = checked(settings.Tempering.TemperatureCount * _replicas);
-        _ladder = new TemperatureLadder(settings.Tempering);
-        _positions = new double[checked(_chainCount * _dimension)];
-        _logLikelihoods = new double[_chainCount];
-        _logPriors = new double[_chainCount];
-        _random = new RandomStream[_chainCount];
+        var schema = _schema;
+        _chains = new TemperedChains(settings.Tempering, settings.Proposals, settings.Seed, settings.StreamId,
+            temperature => new ProposalContext(schema, model, temperature, default));
+        _positions = new double[checked(_chains.ChainCount * _dimension)];
         _candidate = new double[_dimension];
         _swapBuffer = new double[_dimension];
-        _acceptedPerPair = new int[Math.Max(_ladder.Count - 1, 0)];
-        _evidence = new EvidenceAccumulator(_ladder.Count);
-        _temperatures = new ChainTemperature[_chainCount];
-        _mixtures = new ProposalMixture[_chainCount];
-        _swapRandom = RandomStream.ForPath(settings.Seed, settings.StreamId, SwapStreamId);
-        for (int c = 0; c < _chainCount; c++)
-        {
-            int rung = c / _replicas;
-            _random[c] = RandomStream.ForPath(settings.Seed, settings.StreamId, (ulong)c);
-            _temperatures[c] = new ChainTemperature(rung, _ladder.InverseTemperatures[rung]);
-            var context = new ProposalContext(_schema, model, _temperatures[c], default);
-            _mixtures[c] = new ProposalMixture(settings.Proposals, context, settings.Seed, settings.StreamId, (ulong)c);
-            InitialiseFromPrior(c);
-        }
+        for (int c = 0; c < _chains.ChainCount; c++) InitialiseFromPrior(c);
     }
 
     /// <summary>Recreates a sampler from a saved state; the continuation is bit-identical to the original run.</summary>
@@ -106,16 +77,16 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
     public int Dimension => _dimension;
 
     /// <summary>Total number of chains (rungs × replicas).</summary>
-    public int ChainCount => _chainCount;
+    public int ChainCount => _chains.ChainCount;
 
     /// <summary>Number of cold replicas (= chains per temperature); chains 0 .. ColdChainCount − 1 are cold.</summary>
-    public int ColdChainCount => _replicas;
+    public int ColdChainCount => _chains.Replicas;
 
     /// <summary>Steps taken so far.</summary>
-    public long Step { get; private set; }
+    public long Step => _chains.Step;
 
     /// <summary>Current β per rung.</summary>
-    public ReadOnlySpan<double> InverseTemperatures => _ladder.InverseTemperatures;
+    public ReadOnlySpan<double> InverseTemperatures => _chains.Ladder.InverseTemperatures;
 
     /// <summary>Position of chain <paramref name="chain"/> (cold chains are 0 .. ColdChainCount − 1).</summary>
     /// <param name="chain">Chain index.</param>
@@ -125,17 +96,17 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
     /// <summary>ln L of chain <paramref name="chain"/>.</summary>
     /// <param name="chain">Chain index.</param>
     /// <returns>The log likelihood.</returns>
-    public double LogLikelihood(int chain) => _logLikelihoods[chain];
+    public double LogLikelihood(int chain) => _chains.LogLikelihoods[chain];
 
     /// <summary>ln p of chain <paramref name="chain"/>.</summary>
     /// <param name="chain">Chain index.</param>
     /// <returns>The log prior.</returns>
-    public double LogPrior(int chain) => _logPriors[chain];
+    public double LogPrior(int chain) => _chains.LogPriors[chain];
 
     /// <summary>The random stream of chain <paramref name="chain"/> (for determinism checks).</summary>
     /// <param name="chain">Chain index.</param>
     /// <returns>A copy of the stream state.</returns>
-    public RandomStream ChainRandom(int chain) => _random[chain];
+    public RandomStream ChainRandom(int chain) => _chains.Random[chain];
 
     /// <summary>Moves chain <paramref name="chain"/> to <paramref name="position"/> (e.g. a warm start).</summary>
     /// <param name="chain">Chain index.</param>
@@ -156,8 +127,8 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
         }
 
         position.CopyTo(_positions.AsSpan(chain * _dimension, _dimension));
-        _logPriors[chain] = logPrior;
-        _logLikelihoods[chain] = logLikelihood;
+        _chains.LogPriors[chain] = logPrior;
+        _chains.LogLikelihoods[chain] = logLikelihood;
     }
 
     /// <summary>Runs <paramref name="steps"/> steps (each: one proposal per chain, then a swap round when due).</summary>
@@ -174,106 +145,63 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
         ArgumentOutOfRangeException.ThrowIfNegative(steps);
         for (int s = 0; s < steps; s++)
         {
-            for (int c = 0; c < _chainCount; c++)
+            for (int c = 0; c < _chains.ChainCount; c++)
             {
                 UpdateChain(c);
             }
 
-            Step++;
-            if (_ladder.Count > 1 && Step % _settings.Tempering.SwapInterval == 0)
+            _chains.EndStep(this);
+            for (int r = 0; r < _chains.Replicas; r++)
             {
-                SwapRound();
-            }
-
-            for (int c = 0; c < _chainCount; c++)
-            {
-                _evidence.Add(c / _replicas, _logLikelihoods[c]);
-            }
-
-            for (int r = 0; r < _replicas; r++)
-            {
-                sink.OnSample(Step, r, Position(r), _logLikelihoods[r], _logPriors[r]);
+                sink.OnSample(Step, r, Position(r), _chains.LogLikelihoods[r], _chains.LogPriors[r]);
             }
         }
     }
 
     /// <summary>Clears the ⟨ln L⟩ accumulators, e.g. after burn-in and after freezing the ladder.</summary>
-    public void ResetEvidenceAccumulators() => _evidence.Reset();
+    public void ResetEvidenceAccumulators() => _chains.Evidence.Reset();
 
     /// <summary>Thermodynamic-integration evidence from ⟨ln L⟩ per rung since the last reset.</summary>
     /// <returns>The estimate (NaN if a rung has no terms).</returns>
-    public EvidenceEstimate EstimateEvidence() =>
-        ThermodynamicIntegration.LogEvidence(_ladder.InverseTemperatures, _evidence.Means());
+    public EvidenceEstimate EstimateEvidence() => _chains.EstimateEvidence();
 
     /// <summary>A snapshot of acceptance, swap and ladder statistics (allocates; call between advances).</summary>
     /// <returns>The statistics.</returns>
     public SamplerStatistics GetStatistics()
     {
         var proposals = ImmutableArray.CreateBuilder<ProposalAcceptance>();
-        for (int rung = 0; rung < _ladder.Count; rung++)
+        for (int rung = 0; rung < _chains.Ladder.Count; rung++)
         {
-            ReplicaExchange.AddProposalAcceptance(proposals, rung, _replicas, _mixtures, _settings.Proposals);
+            _chains.AddProposalAcceptance(proposals, rung);
         }
 
-        return new SamplerStatistics(
-            Step,
-            [.. _ladder.InverseTemperatures],
-            proposals.ToImmutable(),
-            _ladder.SwapAcceptanceRates(),
-            [.. _evidence.Means()]);
+        return _chains.Statistics(proposals.ToImmutable());
     }
 
     /// <summary>Copies the complete sampler state (allocates; call between advances).</summary>
     /// <returns>The state.</returns>
     public ParallelTemperingState CaptureState()
     {
-        int proposalCount = _settings.Proposals.Length;
-        var proposalStates = new ProposalState?[_chainCount][];
-        long[] proposed = new long[_chainCount * proposalCount];
-        long[] accepted = new long[_chainCount * proposalCount];
-        for (int c = 0; c < _chainCount; c++)
-        {
-            proposalStates[c] = _mixtures[c].CaptureStates();
-            _mixtures[c].Proposed.CopyTo(proposed, c * proposalCount);
-            _mixtures[c].Accepted.CopyTo(accepted, c * proposalCount);
-        }
-
+        var c = _chains.Capture();
         return new ParallelTemperingState(
-            Step, _dimension, _replicas, _ladder.InverseTemperatures.ToArray(), _ladder.Rounds,
-            (long[])_ladder.SwapsProposed.Clone(), (long[])_ladder.SwapsAccepted.Clone(),
-            (double[])_positions.Clone(), (double[])_logLikelihoods.Clone(), (double[])_logPriors.Clone(),
-            (RandomStream[])_random.Clone(), _swapRandom, proposalStates, proposed, accepted,
-            (double[])_evidence.Sums.Clone(), (long[])_evidence.Counts.Clone());
+            c.Step, _dimension, _chains.Replicas, c.InverseTemperatures, c.LadderRounds, c.SwapsProposed, c.SwapsAccepted,
+            (double[])_positions.Clone(), c.LogLikelihoods, c.LogPriors, c.ChainRandom, c.SwapRandom, c.ProposalStates,
+            c.ProposalsProposed, c.ProposalsAccepted, c.EvidenceSums, c.EvidenceCounts);
     }
 
     private void RestoreState(ParallelTemperingState state)
     {
-        if (state.Dimension != _dimension || state.ChainsPerTemperature != _replicas
-            || state.Positions.Length != _positions.Length || state.ChainRandom.Length != _chainCount
-            || state.ProposalStates.Length != _chainCount
-            || state.ProposalsProposed.Length != _chainCount * _settings.Proposals.Length)
+        var saved = new SavedChains(state.Step, state.InverseTemperatures, state.LadderRounds, state.SwapsProposed, state.SwapsAccepted,
+            state.LogLikelihoods, state.LogPriors, state.ChainRandom, state.SwapRandom, state.ProposalStates, state.ProposalsProposed,
+            state.ProposalsAccepted, state.EvidenceSums, state.EvidenceCounts);
+        if (state.Dimension != _dimension || state.ChainsPerTemperature != _chains.Replicas
+            || state.Positions.Length != _positions.Length || !_chains.Fits(saved))
         {
             throw new ArgumentException("Saved state does not match the model and settings.", nameof(state));
         }
 
-        Step = state.Step;
-        _ladder.Restore(state.InverseTemperatures, state.LadderRounds, state.SwapsProposed, state.SwapsAccepted);
+        _chains.Restore(saved);
         state.Positions.CopyTo(_positions, 0);
-        state.LogLikelihoods.CopyTo(_logLikelihoods, 0);
-        state.LogPriors.CopyTo(_logPriors, 0);
-        state.ChainRandom.CopyTo(_random, 0);
-        _swapRandom = state.SwapRandom;
-        int proposalCount = _settings.Proposals.Length;
-        for (int c = 0; c < _chainCount; c++)
-        {
-            _mixtures[c].RestoreStates(
-                state.ProposalStates[c],
-                state.ProposalsProposed.AsSpan(c * proposalCount, proposalCount),
-                state.ProposalsAccepted.AsSpan(c * proposalCount, proposalCount));
-            _temperatures[c].InverseTemperature = _ladder.InverseTemperatures[c / _replicas];
-        }
-
-        _evidence.Restore(state.EvidenceSums, state.EvidenceCounts);
     }
 
     private void InitialiseFromPrior(int chain)
@@ -281,7 +209,7 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
         Span<double> position = _positions.AsSpan(chain * _dimension, _dimension);
         for (int attempt = 0; attempt < MaximumInitialDraws; attempt++)
         {
-            _model.DrawFromPrior(position, ref _random[chain]);
+            _model.DrawFromPrior(position, ref _chains.Random[chain]);
             double logPrior = _model.LogPrior(position);
             if (!double.IsFinite(logPrior))
             {
@@ -291,8 +219,8 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
             double logLikelihood = _model.LogLikelihood(position);
             if (double.IsFinite(logLikelihood))
             {
-                _logPriors[chain] = logPrior;
-                _logLikelihoods[chain] = logLikelihood;
+                _chains.LogPriors[chain] = logPrior;
+                _chains.LogLikelihoods[chain] = logLikelihood;
                 return;
             }
         }
@@ -302,8 +230,8 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
 
     private void UpdateChain(int chain)
     {
-        ref RandomStream random = ref _random[chain];
-        ProposalMixture mixture = _mixtures[chain];
+        ref RandomStream random = ref _chains.Random[chain];
+        ProposalMixture mixture = _chains.Mixtures[chain];
         Span<double> current = _positions.AsSpan(chain * _dimension, _dimension);
         Span<double> candidate = _candidate;
         int proposal = mixture.Choose(ref random);
@@ -314,14 +242,14 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
             if (logPrior > double.NegativeInfinity)
             {
                 double logLikelihood = _model.LogLikelihood(candidate);
-                double beta = _temperatures[chain].InverseTemperature;
-                double logAcceptance = beta * (logLikelihood - _logLikelihoods[chain]) + (logPrior - _logPriors[chain]) + logProposalRatio;
+                double beta = _chains.Temperatures[chain].InverseTemperature;
+                double logAcceptance = beta * (logLikelihood - _chains.LogLikelihoods[chain]) + (logPrior - _chains.LogPriors[chain]) + logProposalRatio;
                 // NaN (e.g. 0·∞ at β = 0 with ln L = −∞, or a NaN likelihood) compares false: rejected.
                 if (logLikelihood > double.NegativeInfinity && MetropolisTest.Accepts(logAcceptance, ref random))
                 {
                     candidate.CopyTo(current);
-                    _logPriors[chain] = logPrior;
-                    _logLikelihoods[chain] = logLikelihood;
+                    _chains.LogPriors[chain] = logPrior;
+                    _chains.LogLikelihoods[chain] = logLikelihood;
                     mixture.RecordAcceptance(proposal);
                 }
             }
@@ -329,9 +257,6 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
 
         mixture.Observe(current);
     }
-
-    private void SwapRound() =>
-        ReplicaExchange.Round(_ladder, _logLikelihoods, _replicas, ref _swapRandom, _acceptedPerPair, _temperatures, this);
 
     /// <inheritdoc/>
     void IChainExchange.Exchange(int first, int second)
@@ -341,8 +266,9 @@ public sealed class ParallelTemperingSampler<TModel> : IChainExchange
         a.CopyTo(_swapBuffer);
         b.CopyTo(a);
         _swapBuffer.AsSpan().CopyTo(b);
-        (_logLikelihoods[first], _logLikelihoods[second]) = (_logLikelihoods[second], _logLikelihoods[first]);
-        (_logPriors[first], _logPriors[second]) = (_logPriors[second], _logPriors[first]);
+        var (logLikelihoods, logPriors) = (_chains.LogLikelihoods, _chains.LogPriors);
+        (logLikelihoods[first], logLikelihoods[second]) = (logLikelihoods[second], logLikelihoods[first]);
+        (logPriors[first], logPriors[second]) = (logPriors[second], logPriors[first]);
     }
 
     private readonly struct NoSampleSink : ISampleSink

@@ -4,8 +4,8 @@ using GlobalFit.Inference.Parameters;
 using GlobalFit.Inference.Proposals;
 using GlobalFit.Inference.Random;
 using GlobalFit.Inference.State;
-using GlobalFit.Inference.Tempering;
 using GlobalFit.Inference.Targets;
+using GlobalFit.Inference.Tempering;
 
 namespace GlobalFit.Inference.Transdimensional;
 
@@ -57,7 +57,6 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
 
     // States saved before split/merge existed hold only the birth and death counters of each chain.
     private const int BirthDeathCounterCount = 4;
-    private const ulong SwapStreamId = ulong.MaxValue;
 
     private readonly TModel _model;
     private readonly IBirthDensity _birth;
@@ -68,23 +67,17 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
     private readonly int _maxSources;
     private readonly int _replicas;
     private readonly int _chainCount;
-    private readonly TemperatureLadder _ladder;
-    private readonly ProposalMixture[] _mixtures;
-    private readonly ChainTemperature[] _temperatures;
+    private readonly TemperedChains _chains;
     private readonly double[][] _sources;
     private readonly int[] _counts;
     private readonly double[] _logLikelihoods;
     private readonly double[] _logPriors;
-    private readonly RandomStream[] _random;
     private readonly long[] _jumpCounters;
     private readonly double[] _removedSource;
     private readonly double[] _mergedSource;
     private readonly double[] _auxiliary;
     private readonly ISourceSplitMerge? _splitMerge;
-    private readonly int[] _acceptedPerPair;
-    private readonly EvidenceAccumulator _evidence;
     private double[] _candidate;
-    private RandomStream _swapRandom;
 
     /// <summary>Creates a sampler; every chain starts with <see cref="ReversibleJumpSettings.InitialSourceCount"/> prior draws.</summary>
     /// <param name="model">The model.</param>
@@ -105,9 +98,13 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
         _sourcePrior = model.SourcePrior ?? throw new ArgumentException("Model source prior must not be null.", nameof(model));
         _dimension = _schema.Dimension;
         _maxSources = settings.MaxSources;
-        _replicas = settings.Tempering.ChainsPerTemperature;
-        _chainCount = checked(settings.Tempering.TemperatureCount * _replicas);
-        _ladder = new TemperatureLadder(settings.Tempering);
+        var (schema, sourcePrior) = (_schema, _sourcePrior);
+        _chains = new TemperedChains(settings.Tempering, settings.WithinProposals, settings.Seed, settings.StreamId,
+            temperature => new ProposalContext(schema, sourcePrior, temperature, default));
+        _replicas = _chains.Replicas;
+        _chainCount = _chains.ChainCount;
+        _logLikelihoods = _chains.LogLikelihoods;
+        _logPriors = _chains.LogPriors;
         int capacity = checked(Math.Max(_maxSources, 1) * _dimension);
         _sources = new double[_chainCount][];
         _candidate = new double[capacity];
@@ -116,23 +113,10 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
         _auxiliary = new double[_dimension];
         _splitMerge = settings.SplitMergeProbability > 0.0 ? settings.SplitMerge : null;
         _counts = new int[_chainCount];
-        _logLikelihoods = new double[_chainCount];
-        _logPriors = new double[_chainCount];
-        _random = new RandomStream[_chainCount];
         _jumpCounters = new long[_chainCount * JumpCounterCount];
-        _acceptedPerPair = new int[Math.Max(_ladder.Count - 1, 0)];
-        _evidence = new EvidenceAccumulator(_ladder.Count);
-        _temperatures = new ChainTemperature[_chainCount];
-        _mixtures = new ProposalMixture[_chainCount];
-        _swapRandom = RandomStream.ForPath(settings.Seed, settings.StreamId, SwapStreamId);
         for (int c = 0; c < _chainCount; c++)
         {
-            int rung = c / _replicas;
             _sources[c] = new double[capacity];
-            _random[c] = RandomStream.ForPath(settings.Seed, settings.StreamId, (ulong)c);
-            _temperatures[c] = new ChainTemperature(rung, _ladder.InverseTemperatures[rung]);
-            var context = new ProposalContext(_schema, _sourcePrior, _temperatures[c], default);
-            _mixtures[c] = new ProposalMixture(settings.WithinProposals, context, settings.Seed, settings.StreamId, (ulong)c);
             Initialise(c, settings.InitialSourceCount);
         }
     }
@@ -161,10 +145,10 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
     public int ColdChainCount => _replicas;
 
     /// <summary>Steps taken so far.</summary>
-    public long Step { get; private set; }
+    public long Step => _chains.Step;
 
     /// <summary>Current β per rung.</summary>
-    public ReadOnlySpan<double> InverseTemperatures => _ladder.InverseTemperatures;
+    public ReadOnlySpan<double> InverseTemperatures => _chains.Ladder.InverseTemperatures;
 
     /// <summary>Number of sources k held by chain <paramref name="chain"/>.</summary>
     /// <param name="chain">Chain index.</param>
@@ -184,7 +168,7 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
     /// <summary>The random stream of chain <paramref name="chain"/> (for determinism checks).</summary>
     /// <param name="chain">Chain index.</param>
     /// <returns>A copy of the stream state.</returns>
-    public RandomStream ChainRandom(int chain) => _random[chain];
+    public RandomStream ChainRandom(int chain) => _chains.Random[chain];
 
     /// <summary>Runs <paramref name="steps"/> steps.</summary>
     /// <param name="steps">Number of steps, ≥ 0.</param>
@@ -205,17 +189,7 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
                 UpdateChain(c);
             }
 
-            Step++;
-            if (_ladder.Count > 1 && Step % _settings.Tempering.SwapInterval == 0)
-            {
-                SwapRound();
-            }
-
-            for (int c = 0; c < _chainCount; c++)
-            {
-                _evidence.Add(c / _replicas, _logLikelihoods[c]);
-            }
-
+            _chains.EndStep(this);
             for (int r = 0; r < _replicas; r++)
             {
                 sink.OnSample(Step, r, _counts[r], Sources(r), _logLikelihoods[r], _logPriors[r]);
@@ -224,21 +198,20 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
     }
 
     /// <summary>Clears the ⟨ln L⟩ accumulators.</summary>
-    public void ResetEvidenceAccumulators() => _evidence.Reset();
+    public void ResetEvidenceAccumulators() => _chains.Evidence.Reset();
 
     /// <summary>Thermodynamic-integration evidence (marginalised over k) since the last reset.</summary>
     /// <returns>The estimate.</returns>
-    public EvidenceEstimate EstimateEvidence() =>
-        ThermodynamicIntegration.LogEvidence(_ladder.InverseTemperatures, _evidence.Means());
+    public EvidenceEstimate EstimateEvidence() => _chains.EstimateEvidence();
 
     /// <summary>A snapshot of acceptance (within-model, birth, death), swap and ladder statistics.</summary>
     /// <returns>The statistics.</returns>
     public SamplerStatistics GetStatistics()
     {
         var proposals = ImmutableArray.CreateBuilder<ProposalAcceptance>();
-        for (int rung = 0; rung < _ladder.Count; rung++)
+        for (int rung = 0; rung < _chains.Ladder.Count; rung++)
         {
-            ReplicaExchange.AddProposalAcceptance(proposals, rung, _replicas, _mixtures, _settings.WithinProposals);
+            _chains.AddProposalAcceptance(proposals, rung);
 
             long births = 0, birthsAccepted = 0, deaths = 0, deathsAccepted = 0;
             for (int r = 0; r < _replicas; r++)
@@ -258,12 +231,7 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
             }
         }
 
-        return new SamplerStatistics(
-            Step,
-            [.. _ladder.InverseTemperatures],
-            proposals.ToImmutable(),
-            _ladder.SwapAcceptanceRates(),
-            [.. _evidence.Means()]);
+        return _chains.Statistics(proposals.ToImmutable());
     }
 
     private void AddSplitMergeAcceptance(ImmutableArray<ProposalAcceptance>.Builder proposals, int rung)
@@ -286,62 +254,38 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
     /// <returns>The state.</returns>
     public ReversibleJumpState CaptureState()
     {
-        int proposalCount = _settings.WithinProposals.Length;
-        var proposalStates = new ProposalState?[_chainCount][];
-        long[] proposed = new long[_chainCount * proposalCount];
-        long[] accepted = new long[_chainCount * proposalCount];
-        double[][] sources = new double[_chainCount][];
-        for (int c = 0; c < _chainCount; c++)
-        {
-            proposalStates[c] = _mixtures[c].CaptureStates();
-            _mixtures[c].Proposed.CopyTo(proposed, c * proposalCount);
-            _mixtures[c].Accepted.CopyTo(accepted, c * proposalCount);
-            sources[c] = (double[])_sources[c].Clone();
-        }
-
+        var c = _chains.Capture();
+        double[][] sources = [.. _sources.Select(chain => (double[])chain.Clone())];
         return new ReversibleJumpState(
-            Step, _dimension, _maxSources, _replicas, _ladder.InverseTemperatures.ToArray(), _ladder.Rounds,
-            (long[])_ladder.SwapsProposed.Clone(), (long[])_ladder.SwapsAccepted.Clone(),
-            (int[])_counts.Clone(), sources, (double[])_logLikelihoods.Clone(), (double[])_logPriors.Clone(),
-            (RandomStream[])_random.Clone(), _swapRandom, proposalStates, proposed, accepted,
-            (long[])_jumpCounters.Clone(), (double[])_evidence.Sums.Clone(), (long[])_evidence.Counts.Clone());
+            c.Step, _dimension, _maxSources, _replicas, c.InverseTemperatures, c.LadderRounds, c.SwapsProposed, c.SwapsAccepted,
+            (int[])_counts.Clone(), sources, c.LogLikelihoods, c.LogPriors, c.ChainRandom, c.SwapRandom, c.ProposalStates,
+            c.ProposalsProposed, c.ProposalsAccepted, (long[])_jumpCounters.Clone(), c.EvidenceSums, c.EvidenceCounts);
     }
 
     private void RestoreState(ReversibleJumpState state)
     {
-        int proposalCount = _settings.WithinProposals.Length;
+        var saved = new SavedChains(state.Step, state.InverseTemperatures, state.LadderRounds, state.SwapsProposed, state.SwapsAccepted,
+            state.LogLikelihoods, state.LogPriors, state.ChainRandom, state.SwapRandom, state.ProposalStates, state.ProposalsProposed,
+            state.ProposalsAccepted, state.EvidenceSums, state.EvidenceCounts);
         if (state.SourceDimension != _dimension || state.MaxSources != _maxSources || state.ChainsPerTemperature != _replicas
-            || state.SourceCounts.Length != _chainCount || state.Sources.Length != _chainCount
-            || state.ProposalStates.Length != _chainCount || state.ProposalsProposed.Length != _chainCount * proposalCount
+            || state.SourceCounts.Length != _chainCount || state.Sources.Length != _chainCount || !_chains.Fits(saved)
             || (state.JumpCounters.Length != _jumpCounters.Length && state.JumpCounters.Length != _chainCount * BirthDeathCounterCount))
         {
             throw new ArgumentException("Saved state does not match the model and settings.", nameof(state));
         }
 
-        Step = state.Step;
-        _ladder.Restore(state.InverseTemperatures, state.LadderRounds, state.SwapsProposed, state.SwapsAccepted);
         for (int c = 0; c < _chainCount; c++)
         {
             if (state.Sources[c].Length != _sources[c].Length)
             {
                 throw new ArgumentException("Saved source buffer has the wrong length.", nameof(state));
             }
-
-            state.Sources[c].CopyTo(_sources[c], 0);
-            _mixtures[c].RestoreStates(
-                state.ProposalStates[c],
-                state.ProposalsProposed.AsSpan(c * proposalCount, proposalCount),
-                state.ProposalsAccepted.AsSpan(c * proposalCount, proposalCount));
-            _temperatures[c].InverseTemperature = _ladder.InverseTemperatures[c / _replicas];
         }
 
+        _chains.Restore(saved);
+        for (int c = 0; c < _chainCount; c++) state.Sources[c].CopyTo(_sources[c], 0);
         state.SourceCounts.CopyTo(_counts, 0);
-        state.LogLikelihoods.CopyTo(_logLikelihoods, 0);
-        state.LogPriors.CopyTo(_logPriors, 0);
-        state.ChainRandom.CopyTo(_random, 0);
         RestoreJumpCounters(state.JumpCounters);
-        _swapRandom = state.SwapRandom;
-        _evidence.Restore(state.EvidenceSums, state.EvidenceCounts);
     }
 
     private void RestoreJumpCounters(long[] saved)
@@ -363,7 +307,7 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
     {
         for (int j = 0; j < count; j++)
         {
-            _sourcePrior.DrawFromPrior(_sources[chain].AsSpan(j * _dimension, _dimension), ref _random[chain]);
+            _sourcePrior.DrawFromPrior(_sources[chain].AsSpan(j * _dimension, _dimension), ref _chains.Random[chain]);
         }
 
         _counts[chain] = count;
@@ -396,7 +340,7 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
 
     private void UpdateChain(int chain)
     {
-        ref RandomStream random = ref _random[chain];
+        ref RandomStream random = ref _chains.Random[chain];
         if (_maxSources > 0)
         {
             // One uniform chooses the move kind; with no split/merge this is the same draw and the same branches as
@@ -546,7 +490,7 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
     private void WithinModel(int chain, ref RandomStream random)
     {
         int count = _counts[chain];
-        ProposalMixture mixture = _mixtures[chain];
+        ProposalMixture mixture = _chains.Mixtures[chain];
         double[] sources = _sources[chain];
         int slot = random.NextInt(count);
         sources.AsSpan(0, count * _dimension).CopyTo(_candidate);
@@ -577,7 +521,7 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
             return false;
         }
 
-        double beta = _temperatures[chain].InverseTemperature;
+        double beta = _chains.Temperatures[chain].InverseTemperature;
         double logAcceptance = beta * (logLikelihood - _logLikelihoods[chain]) + (logPrior - _logPriors[chain]) + logProposalRatio;
         if (!MetropolisTest.Accepts(logAcceptance, ref random))
         {
@@ -606,9 +550,6 @@ public sealed class ReversibleJumpSampler<TModel> : IChainExchange
             (a[i], b[i]) = (b[i], a[i]);
         }
     }
-
-    private void SwapRound() =>
-        ReplicaExchange.Round(_ladder, _logLikelihoods, _replicas, ref _swapRandom, _acceptedPerPair, _temperatures, this);
 
     /// <inheritdoc/>
     void IChainExchange.Exchange(int first, int second)

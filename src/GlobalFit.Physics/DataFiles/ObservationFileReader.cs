@@ -1,9 +1,9 @@
 using System.Globalization;
 using GlobalFit.Physics.Files;
 using GlobalFit.Physics.Series;
+using L = GlobalFit.Physics.DataFiles.ObservationFileLayout;
 using PureHDF;
 using PureHDF.VOL.Native;
-using L = GlobalFit.Physics.DataFiles.ObservationFileLayout;
 
 namespace GlobalFit.Physics.DataFiles;
 

@@ -4,9 +4,8 @@ using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Simulation;
-using GlobalFit.Engine.SourceClasses.GalacticBinaries;
-
 using GlobalFit.Engine.SourceClasses;
+using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 
 namespace GlobalFit.Cli.Tests.Commands;
 

@@ -67,7 +67,7 @@ public class FileLayoutTests
            }
            GROUP "catalogue" {
               GROUP "galactic_binaries" {
-                 DATASET "entries" {
+                 DATASET "sources" {
                     DATATYPE  H5T_COMPOUND {
                        H5T_STRING {
                           STRSIZE H5T_VARIABLE;
@@ -81,7 +81,7 @@ public class FileLayoutTests
            }
         }
         }
-        """, "/,/@format_version,/catalogue,/catalogue/galactic_binaries,/catalogue/galactic_binaries/entries,/catalogue/galactic_binaries/entries#Confidence,/catalogue/galactic_binaries/entries#Id")]
+        """, "/,/@format_version,/catalogue,/catalogue/galactic_binaries,/catalogue/galactic_binaries/sources,/catalogue/galactic_binaries/sources#Confidence,/catalogue/galactic_binaries/sources#Id")]
     public void The_h5dump_reader_reports_groups_datasets_attributes_and_compound_members(string header, string expected)
     {
         Assert.Equal(expected.Split(','), Hdf5Structure.Parse(header));

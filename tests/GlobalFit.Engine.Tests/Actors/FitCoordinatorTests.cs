@@ -1,8 +1,7 @@
 using Akka.Configuration;
 using GlobalFit.Engine.Actors;
-using GlobalFit.Engine.Runs;
-
 using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.Runs;
 
 namespace GlobalFit.Engine.Tests.Actors;
 

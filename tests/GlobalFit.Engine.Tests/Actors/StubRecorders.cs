@@ -3,10 +3,9 @@ using Akka.Actor;
 using GlobalFit.Engine.Actors;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Fitting;
-using GlobalFit.Physics.Series;
-using GlobalFit.Engine.Runs;
-
 using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.Runs;
+using GlobalFit.Physics.Series;
 
 namespace GlobalFit.Engine.Tests.Actors;
 

@@ -2,8 +2,8 @@ using System.Collections.Immutable;
 using System.Globalization;
 using System.Text.Json;
 using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Samples;
 using GlobalFit.Physics.Files;
 using PureHDF;
 
@@ -47,11 +47,11 @@ public class CatalogueWriterTests
         Assert.Equal(2, file.Attribute("format_version").Read<int>());
         var gb = file.Group("catalogue/galactic_binaries");
         Assert.Equal(["f0_hz", "amplitude"], gb.Attribute("columns").Read<string[]>());
-        var entries = gb.Dataset("sources").Read<CatalogueSourceRow[]>();
-        Assert.Equal(["gb-0001", "gb-0002"], entries.Select(e => e.Id));
-        Assert.Equal([0.75, 1.0], entries.Select(e => e.Confidence));
-        Assert.True(double.IsNaN(entries[1].Snr));
-        Assert.Equal([(0L, 3L), (3L, 1L)], entries.Select(e => (e.FirstSample, e.SampleCount)));
+        var rows = gb.Dataset("sources").Read<CatalogueSourceRow[]>();
+        Assert.Equal(["gb-0001", "gb-0002"], rows.Select(e => e.Id));
+        Assert.Equal([0.75, 1.0], rows.Select(e => e.Confidence));
+        Assert.True(double.IsNaN(rows[1].Snr));
+        Assert.Equal([(0L, 3L), (3L, 1L)], rows.Select(e => (e.FirstSample, e.SampleCount)));
         Assert.Equal(new[,] { { 1e-3, 2e-22 }, { 2e-3, 5e-23 } }, gb.Dataset("median").Read<double[,]>());
         Assert.Equal(new[,] { { 1.1e-3, 3e-22 }, { 2e-3, 5e-23 } }, gb.Dataset("upper").Read<double[,]>());
         Assert.Equal(new[,] { { 0.9e-3, 1e-22 }, { 1e-3, 2e-22 }, { 1.1e-3, 3e-22 }, { 2e-3, 5e-23 } }, gb.Dataset("samples").Read<double[,]>());

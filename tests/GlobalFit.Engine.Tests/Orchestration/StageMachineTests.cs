@@ -130,6 +130,17 @@ public sealed class StageMachineTests
     }
 
     [Fact]
+    public void A_stop_before_the_start_finishes_at_the_start_without_running_anything()
+    {
+        var machine = Machine(iterations: 5);
+        machine.OnStopRequested();
+        Assert.Null(_host.Outcome);
+        machine.Start();
+        Assert.Equal(FitOutcomeKind.Interrupted, _host.Outcome!.Kind);
+        Assert.Empty(_host.Updates);
+    }
+
+    [Fact]
     public void Checkpoints_follow_the_iteration_cadence_and_the_time_limit()
     {
         var machine = Machine(iterations: 10, checkpointEvery: 4, checkpointMinutes: 30);
@@ -145,15 +156,35 @@ public sealed class StageMachineTests
     }
 
     [Fact]
-    public void A_failed_checkpoint_is_reported_and_the_run_goes_on_with_the_previous_one()
+    public void A_failed_checkpoint_stops_the_run_naming_the_cause_and_keeping_the_previous_one()
     {
-        var machine = Machine(iterations: 2, checkpointEvery: 1);
+        var machine = Machine(iterations: 3, checkpointEvery: 1);
         machine.Start();
         RunIteration(machine, 1);
         machine.OnAppended(1);
-        machine.OnCheckpointWritten(1, "disk full");
-        Assert.Contains("disk full", Assert.Single(_host.Warnings), StringComparison.Ordinal);
-        Assert.Equal("update s/0", _host.Calls[^2]); // iteration 2 started
+        machine.OnCheckpointWritten(1, null);
+        RunIteration(machine, 2);
+        machine.OnAppended(2);
+        machine.OnCheckpointWritten(2, "/run/checkpoints/latest.tmp: No space left on device");
+        Assert.Equal(FitOutcomeKind.WriteFailed, _host.Outcome!.Kind);
+        Assert.Equal(1, _host.Outcome.CheckpointIteration);
+        Assert.Contains("No space left", _host.Outcome.Message, StringComparison.Ordinal);
+        Assert.Equal("finished WriteFailed", _host.Calls[^1]); // no third iteration
+    }
+
+    [Fact]
+    public void A_failed_sample_append_stops_the_run_at_once()
+    {
+        var machine = Machine(iterations: 3, checkpointEvery: 1);
+        machine.Start();
+        RunIteration(machine, 1);
+        machine.OnAppendFailed(1, "/run/samples/s.0.samples: cannot be appended to: disk full");
+        Assert.Equal(FitOutcomeKind.WriteFailed, _host.Outcome!.Kind);
+        Assert.Equal(0, _host.Outcome.IterationsCompleted);
+        Assert.Empty(_host.Checkpoints); // nothing is written after a failed write
+        Assert.Contains("s.0.samples", _host.Outcome.Message, StringComparison.Ordinal);
+        machine.OnStopRequested(); // a stop after the end is ignored
+        Assert.Equal("finished WriteFailed", _host.Calls[^1]);
     }
 
     [Fact]

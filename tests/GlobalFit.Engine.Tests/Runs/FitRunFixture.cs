@@ -1,12 +1,10 @@
 using GlobalFit.Engine.Configuration;
+using GlobalFit.Engine.Orchestration;
 using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Simulation;
+using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.DataFiles;
-
-using GlobalFit.Engine.Orchestration;
-
-using GlobalFit.Engine.SourceClasses;
 
 namespace GlobalFit.Engine.Tests.Runs;
 

@@ -1,7 +1,6 @@
+using GlobalFit.Engine.Orchestration;
 using GlobalFit.Engine.Runs;
 using GlobalFit.Engine.Tests.Catalogue;
-
-using GlobalFit.Engine.Orchestration;
 
 namespace GlobalFit.Engine.Tests.Runs;
 

@@ -1,6 +1,6 @@
 using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Runs;
+using GlobalFit.Engine.Samples;
 
 namespace GlobalFit.Engine.Tests.Runs;
 

@@ -1,6 +1,6 @@
-using GlobalFit.Engine.Tests.Catalogue;
-using GlobalFit.Engine.Samples;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.Samples;
+using GlobalFit.Engine.Tests.Catalogue;
 using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Tests.Samples;
@@ -185,6 +185,31 @@ public class SampleStoreTests
         Assert.Empty(store.ReadAll());
         Assert.Empty(store.CountSamples());
         Assert.Empty(store.TruncateAfter(0));
+    }
+
+    [Fact]
+    public void A_missing_commit_record_beside_sample_files_is_an_error_for_every_reader_never_zero_samples()
+    {
+        using var run = new TemporaryRunFolder();
+        var store = new SampleStore(run.Path);
+        store.Append(Iteration(1));
+        File.Delete(Path.Combine(store.SamplesFolder, "committed"));
+        foreach (var read in new Action[] { () => store.ReadAll().ToList(), () => store.CountSamples(), () => store.TruncateAfter(0), () => _ = store.CommittedIteration })
+        {
+            var error = Assert.Throws<InvalidInputException>(read);
+            Assert.Contains("committed", error.Message, StringComparison.Ordinal);
+            Assert.Contains("missing", error.Message, StringComparison.Ordinal);
+        }
+    }
+
+    [Fact]
+    public void A_store_that_committed_nothing_yet_still_has_its_commit_record()
+    {
+        using var run = new TemporaryRunFolder();
+        var store = new SampleStore(run.Path);
+        store.Append(Iteration(1));
+        Assert.True(File.Exists(Path.Combine(store.SamplesFolder, "committed")));
+        Assert.Equal(1, store.CommittedIteration);
     }
 
     [Theory]

@@ -1,9 +1,8 @@
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
+using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 using GlobalFit.Physics.Files;
-
-using GlobalFit.Engine.SourceClasses;
 
 namespace GlobalFit.Engine.Tests.Simulation;
 

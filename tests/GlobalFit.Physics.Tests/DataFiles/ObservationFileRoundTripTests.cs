@@ -1,6 +1,6 @@
-using Xunit;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Series;
+using Xunit;
 
 namespace GlobalFit.Physics.Tests.DataFiles;
 

@@ -68,8 +68,8 @@ public sealed record GalacticBinaryBandSettings
     /// <value>Frequency bins of the record.</value>
     public double SplitMergeBins { get; init; } = 4.0;
 
-    /// <summary>Catalogue entries whose median optimal SNR lies below this are left out [<c>catalogue_min_snr</c>].</summary>
-    /// <remarks>Default 5, common practice rather than a derived value: below it the sampler's confident entries are
+    /// <summary>Catalogue sources whose median optimal SNR lies below this are left out [<c>catalogue_min_snr</c>].</summary>
+    /// <remarks>Default 5, common practice rather than a derived value: below it the sampler's confident sources are
     /// mostly blends of several weak binaries or noise fluctuations that match no single source, so a catalogue is
     /// thresholded there (0 keeps everything).</remarks>
     public double CatalogueMinSnr { get; init; } = 5.0;

@@ -1,5 +1,4 @@
 using System.Collections.Immutable;
-
 using GlobalFit.Engine.Fitting;
 
 namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;

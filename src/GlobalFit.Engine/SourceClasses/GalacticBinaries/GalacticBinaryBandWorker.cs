@@ -1,14 +1,13 @@
 using System.Collections.Immutable;
 using System.Diagnostics;
 using System.Numerics;
+using GlobalFit.Engine.Fitting;
 using GlobalFit.Inference.Proposals;
 using GlobalFit.Inference.State;
 using GlobalFit.Inference.Tempering;
 using GlobalFit.Inference.Transdimensional;
 using GlobalFit.Physics.GalacticBinaries;
 using MessagePack;
-
-using GlobalFit.Engine.Fitting;
 
 namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 

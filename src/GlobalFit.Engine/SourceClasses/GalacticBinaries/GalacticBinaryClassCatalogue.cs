@@ -98,16 +98,16 @@ public sealed class GalacticBinaryClassCatalogue : IClassCatalogue
         }
     }
 
-    /// <summary>The entries of all workers, by median f0, numbered from <c>gb-0001</c>.</summary>
+    /// <summary>The sources of all workers, by median f0, numbered from <c>gb-0001</c>.</summary>
     /// <returns>The records; parameters are the eight columns of <see cref="GalacticBinaryParameters.ColumnNames"/>.</returns>
     public ImmutableArray<CatalogueRecord> Build()
     {
-        var entries = _builders.Values.SelectMany(b => b.Build(MinimumConfidence, MinimumSnr)).OrderBy(e => e.Median.FrequencyHz).ToList();
-        int digits = Math.Max(4, entries.Count.ToString(CultureInfo.InvariantCulture).Length);
-        var records = ImmutableArray.CreateBuilder<CatalogueRecord>(entries.Count);
-        for (int i = 0; i < entries.Count; i++)
+        var rows = _builders.Values.SelectMany(b => b.Build(MinimumConfidence, MinimumSnr)).OrderBy(e => e.Median.FrequencyHz).ToList();
+        int digits = Math.Max(4, rows.Count.ToString(CultureInfo.InvariantCulture).Length);
+        var records = ImmutableArray.CreateBuilder<CatalogueRecord>(rows.Count);
+        for (int i = 0; i < rows.Count; i++)
         {
-            var entry = entries[i];
+            var entry = rows[i];
             string id = IdPrefix + (i + 1).ToString(CultureInfo.InvariantCulture).PadLeft(digits, '0');
             var samples = ImmutableArray.CreateBuilder<double>(entry.Members.Length * ColumnMap.Width);
             foreach (var member in entry.Members) samples.AddRange(member.ToRow());

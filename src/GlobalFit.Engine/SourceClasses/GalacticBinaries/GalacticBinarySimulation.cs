@@ -2,12 +2,11 @@ using System.Globalization;
 using System.Numerics;
 using System.Text;
 using GlobalFit.Engine.Configuration;
+using GlobalFit.Engine.Simulation;
 using GlobalFit.Inference.Random;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.GalacticBinaries;
 using GlobalFit.Physics.Series;
-
-using GlobalFit.Engine.Simulation;
 
 namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 

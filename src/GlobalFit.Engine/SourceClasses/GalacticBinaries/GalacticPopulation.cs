@@ -1,9 +1,8 @@
+using GlobalFit.Engine.Simulation;
 using GlobalFit.Inference.Random;
 using GlobalFit.Physics.Astrometry;
 using GlobalFit.Physics.Constants;
 using GlobalFit.Physics.Detector;
-
-using GlobalFit.Engine.Simulation;
 
 namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 

@@ -1,5 +1,4 @@
 using GlobalFit.Engine.Configuration;
-
 using GlobalFit.Engine.Simulation;
 
 namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;

@@ -1,8 +1,8 @@
 using System.Diagnostics;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.SourceClasses.GalacticBinaries;
-using GlobalFit.Physics.GalacticBinaries;
 using GlobalFit.Physics.Files;
+using GlobalFit.Physics.GalacticBinaries;
 
 namespace GlobalFit.Engine.Tests.SourceClasses.GalacticBinaries;
 

@@ -1,11 +1,10 @@
 using GlobalFit.Engine.Catalogue;
-using GlobalFit.Engine.Tests.Catalogue;
 using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.SourceClasses.GalacticBinaries;
+using GlobalFit.Engine.Tests.Catalogue;
 using GlobalFit.Physics.GalacticBinaries;
 using GlobalFit.Physics.Noise;
 using GlobalFit.Physics.Series;
-
-using GlobalFit.Engine.SourceClasses.GalacticBinaries;
 
 namespace GlobalFit.Engine.Tests.SourceClasses.GalacticBinaries;
 

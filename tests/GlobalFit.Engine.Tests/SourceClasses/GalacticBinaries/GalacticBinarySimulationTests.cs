@@ -1,12 +1,11 @@
 using System.Numerics;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Simulation;
-using GlobalFit.Engine.SourceClasses.GalacticBinaries;
-using GlobalFit.Physics.GalacticBinaries;
-using GlobalFit.Physics.Files;
-using GlobalFit.Physics.Series;
-
 using GlobalFit.Engine.SourceClasses;
+using GlobalFit.Engine.SourceClasses.GalacticBinaries;
+using GlobalFit.Physics.Files;
+using GlobalFit.Physics.GalacticBinaries;
+using GlobalFit.Physics.Series;
 
 namespace GlobalFit.Engine.Tests.SourceClasses.GalacticBinaries;
 

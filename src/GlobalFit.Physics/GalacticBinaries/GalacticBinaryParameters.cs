@@ -67,6 +67,19 @@ public readonly record struct GalacticBinaryParameters(
         EclipticLongitudeColumn, InclinationColumn, PolarisationColumn, InitialPhaseColumn,
     ];
 
+    /// <summary>The nine columns of truth tables and catalogues, in the order both files use: the eight of
+    /// <see cref="ColumnNames"/> with <c>fddot_hz_s2</c> beside <c>fdot_hz_s</c>, so the frequency and its derivatives
+    /// read together and a truth row and a catalogue row line up column for column.</summary>
+    public static ImmutableArray<string> TableColumnNames { get; } =
+    [
+        FrequencyColumn, FrequencyDerivativeColumn, SecondFrequencyDerivativeColumn, AmplitudeColumn, EclipticLatitudeColumn,
+        EclipticLongitudeColumn, InclinationColumn, PolarisationColumn, InitialPhaseColumn,
+    ];
+
+    /// <summary>The values of the nine <see cref="TableColumnNames"/>, in that order: the row of truth tables and catalogues.</summary>
+    public double[] ToTableRow() =>
+        [FrequencyHz, FrequencyDerivativeHzS, SecondFrequencyDerivativeHzS2, Amplitude, EclipticLatitudeRad, EclipticLongitudeRad, InclinationRad, PolarisationRad, InitialPhaseRad];
+
     /// <summary>The values of the eight <see cref="ColumnNames"/>, in that order: the one row layout of samples,
     /// handovers and catalogue rows.</summary>
     public double[] ToRow() =>

@@ -1,5 +1,6 @@
 using System.Text.Json;
 using GlobalFit.Cli.Tests.Support;
+using GlobalFit.Physics.DataFiles;
 using GlobalFit.Tests.Shared;
 
 namespace GlobalFit.Cli.Tests.Commands;
@@ -34,7 +35,15 @@ public class InterfaceNamesTests
         // Truth and catalogue name the amplitude `amplitude`, and catalogue rows are sources.
         var inspect = JsonDocument.Parse(CliRun.Run("inspect", data, "--json").Out).RootElement;
         Assert.Equal(15.0, inspect.GetProperty("cadence_s").GetDouble());
-        Assert.Contains("amplitude", CliRun.Run("catalogue", run).Out.Split('\n')[0].Split(','));
+        string[] header = CliRun.Run("catalogue", run).Out.Split('\n')[0].Split(',');
+        Assert.Contains("amplitude", header);
+
+        // Truth and catalogue hold the same parameter columns in the same order, fddot_hz_s2 beside fdot_hz_s.
+        var truthColumns = ObservationFile.Read(data).FindTruth("galactic_binaries")!.Columns.Where(c => c != "snr").ToList();
+        // The galactic binaries come first; the noise row's columns follow theirs.
+        var catalogueColumns = header.Skip(4).Where(c => !c.EndsWith("_lo", StringComparison.Ordinal) && !c.EndsWith("_hi", StringComparison.Ordinal)).Take(truthColumns.Count).ToList();
+        Assert.Equal(truthColumns, catalogueColumns);
+        Assert.Equal("fddot_hz_s2", truthColumns[truthColumns.IndexOf("fdot_hz_s") + 1]);
         var catalogue = JsonDocument.Parse(CliRun.Run("catalogue", run, "--format", "json").Out).RootElement;
         Assert.Equal(2, catalogue.GetProperty("format_version").GetInt32());
         Assert.True(catalogue.TryGetProperty("sources", out _));

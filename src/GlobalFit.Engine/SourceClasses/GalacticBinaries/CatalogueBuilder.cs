@@ -121,7 +121,8 @@ public sealed class CatalogueBuilder
             Quantile(members.Select(m => Wrap(m.EclipticLongitudeRad, 2 * Math.PI)), quantile),
             Quantile(members.Select(m => m.InclinationRad), quantile),
             Quantile(members.Select(m => Wrap(m.PolarisationRad, Math.PI)), quantile),
-            Quantile(members.Select(m => Wrap(m.InitialPhaseRad, 2 * Math.PI)), quantile));
+            Quantile(members.Select(m => Wrap(m.InitialPhaseRad, 2 * Math.PI)), quantile),
+            Quantile(members.Select(m => m.SecondFrequencyDerivativeHzS2), quantile));
         return new CatalogueEntry((double)members.Count / _sampleCount, members.Count, At(0.5), At(0.05), At(0.95), Quantile(entry.Snrs, 0.5), [.. members]);
     }
 

@@ -99,7 +99,8 @@ public sealed class GalacticBinaryClassCatalogue : IClassCatalogue
     }
 
     /// <summary>The sources of all workers, by median f0, numbered from <c>gb-0001</c>.</summary>
-    /// <returns>The records; parameters are the eight columns of <see cref="GalacticBinaryParameters.ColumnNames"/>.</returns>
+    /// <returns>The records; parameters are the nine columns of <see cref="GalacticBinaryParameters.TableColumnNames"/>, the
+    /// order of the truth table (f̈ is what the samples hold: 0 while the fit keeps it fixed).</returns>
     public ImmutableArray<CatalogueRecord> Build()
     {
         var rows = _builders.Values.SelectMany(b => b.Build(MinimumConfidence, MinimumSnr)).OrderBy(e => e.Median.FrequencyHz).ToList();
@@ -109,10 +110,10 @@ public sealed class GalacticBinaryClassCatalogue : IClassCatalogue
         {
             var entry = rows[i];
             string id = IdPrefix + (i + 1).ToString(CultureInfo.InvariantCulture).PadLeft(digits, '0');
-            var samples = ImmutableArray.CreateBuilder<double>(entry.Members.Length * ColumnMap.Width);
-            foreach (var member in entry.Members) samples.AddRange(member.ToRow());
-            records.Add(new CatalogueRecord(id, ClassId, entry.Confidence, entry.MedianSnr, GalacticBinaryParameters.ColumnNames,
-                [.. entry.Median.ToRow()], [.. entry.Lower.ToRow()], [.. entry.Upper.ToRow()], samples.MoveToImmutable()));
+            var samples = ImmutableArray.CreateBuilder<double>(entry.Members.Length * GalacticBinaryParameters.TableColumnNames.Length);
+            foreach (var member in entry.Members) samples.AddRange(member.ToTableRow());
+            records.Add(new CatalogueRecord(id, ClassId, entry.Confidence, entry.MedianSnr, GalacticBinaryParameters.TableColumnNames,
+                [.. entry.Median.ToTableRow()], [.. entry.Lower.ToTableRow()], [.. entry.Upper.ToTableRow()], samples.MoveToImmutable()));
         }
         return records.MoveToImmutable();
     }

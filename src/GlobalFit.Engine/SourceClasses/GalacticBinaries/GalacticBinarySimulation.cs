@@ -123,13 +123,13 @@ public sealed class GalacticBinarySimulation : ISimulatedSourceClass
                 context.Observation.SampleCount * context.Observation.CadenceS, context.Observation.CadenceS,
                 startSeconds: context.Observation.StartS);
             var whole = new BinWindow(0, a.Length);
-            string[] columns = [.. GalacticBinaryParameters.ColumnNames, GalacticBinaryParameters.SecondFrequencyDerivativeColumn, "snr"];
+            string[] columns = [.. GalacticBinaryParameters.TableColumnNames, "snr"];
             var values = new double[sources.Count * columns.Length];
             for (int i = 0; i < sources.Count; i++)
             {
                 var s = sources[i].Parameters;
                 generator.AddResponse(s, whole, a, e, t);
-                double[] row = [.. s.ToRow(), s.SecondFrequencyDerivativeHzS2, GalacticBinarySnr.Optimal(generator, s, context.Noise)];
+                double[] row = [.. s.ToTableRow(), GalacticBinarySnr.Optimal(generator, s, context.Noise)];
                 row.CopyTo(values, i * columns.Length);
             }
             return new TruthTable(Id, columns, sources.Select(x => x.Id), values);

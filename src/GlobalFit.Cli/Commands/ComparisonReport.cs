@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using System.Globalization;
 using GlobalFit.Engine.Evaluation;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Commands;
 
@@ -82,7 +83,7 @@ internal static class ComparisonReport
     };
 
     private static string Parameters(ImmutableArray<string> columns, ImmutableArray<double> values) =>
-        string.Join(", ", columns.Select((c, i) => I($"{c} {values[i]:G4}")));
+        string.Join(", ", columns.Select((c, i) => $"{c} {NumberText.Significant(values[i], 4)}"));
 
     // Column headers short enough for a terminal: the name without its unit.
     private static string Short(string column)

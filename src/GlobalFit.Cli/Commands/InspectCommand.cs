@@ -43,15 +43,15 @@ public static class InspectCommand
         var p = r.Observation.Provenance;
         string I(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
         o.WriteLine(I($"file          {r.Path}"));
-        o.WriteLine(I($"format        version {r.Observation.FormatVersion}, written by {p.Generator} at {p.CreatedUtc:yyyy-MM-dd HH:mm:ss} UTC"));
+        o.WriteLine(I($"format        version {r.Observation.FormatVersion}, written by {p.Generator} at {UtcText.Format(p.CreatedUtc)}"));
         if (p.Entries.TryGetValue("scenario_name", out var name)) o.WriteLine($"scenario      {name}");
         o.WriteLine(I($"time axis     start {data.T0Seconds} s, cadence {data.DtSeconds} s, {data.Count} points = {data.Count * data.DtSeconds / 86400:F3} days"));
         o.WriteLine(I($"gaps          {r.Observation.Gaps.Count} ({r.Observation.Gaps.TotalSeconds / 3600:F2} h in total)"));
         o.WriteLine($"noise model   {r.ModelDescription}");
         if (r.Channels.Count > 0)
-            o.WriteLine(I($"Welch/model   {r.Welch[0].SegmentCount} segments of {r.Welch[0].SegmentLength} points, band {r.Channels[0].BandLowHz * 1e3:G3}–{r.Channels[0].BandHighHz * 1e3:G3} mHz"));
+            o.WriteLine(I($"Welch/model   {r.Welch[0].SegmentCount} segments of {r.Welch[0].SegmentLength} points, band {NumberText.Significant(r.Channels[0].BandLowHz * 1e3, 3)}–{NumberText.Significant(r.Channels[0].BandHighHz * 1e3, 3)} mHz"));
         foreach (var c in r.Channels)
-            o.WriteLine(I($"  {c.Channel}  rms {c.RmsValue:E3}   mean estimate/model {c.MeanRatio:F4} ± {c.RatioStandardError:F4}   chi²/bin {c.ChiSquarePerBin:F3} over {c.BinsCompared} bins"));
+            o.WriteLine(I($"  {c.Channel}  rms {NumberText.Scientific(c.RmsValue, 2)}   mean estimate/model {c.MeanRatio:F4} ± {c.RatioStandardError:F4}   chi²/bin {c.ChiSquarePerBin:F3} over {c.BinsCompared} bins"));
         foreach (var x in r.CrossChannels)
             o.WriteLine(I($"  {x.Pair} mean coherence {x.MeanCoherence:F4} (independent noise: {x.ExpectedForIndependent:F4})"));
         if (r.Injected.Count == 0) o.WriteLine("injected      none");

@@ -115,10 +115,10 @@ public static class SensitivityCommand
         else
         {
             context.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"wrote {r.Points} frequencies from {r.FMin:G3} to {r.FMax:G3} Hz to {csvPath}"));
+                $"wrote {r.Points} frequencies from {NumberText.Significant(r.FMin, 3)} to {NumberText.Significant(r.FMax, 3)} Hz to {csvPath}"));
             if (pngPath is not null) context.Out.WriteLine($"wrote chart to {pngPath}");
             context.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"most sensitive at {fBest * 1e3:F2} mHz: sqrt(S_n) = {Math.Sqrt(sBest):E3} /sqrt(Hz)"));
+                $"most sensitive at {fBest * 1e3:F2} mHz: sqrt(S_n) = {NumberText.Scientific(Math.Sqrt(sBest), 2)} /sqrt(Hz)"));
         }
         return ExitCodes.Success;
     }

@@ -45,7 +45,7 @@ public static class StatusCommand
         var o = context.Out;
         o.WriteLine($"run        {layout.Root}");
         o.WriteLine($"state      {state}");
-        o.WriteLine(string.Create(CultureInfo.InvariantCulture, $"iteration  {status.Iteration}/{status.TotalIterations} (last iteration {status.LastIterationSeconds:F2} s; updated {status.UpdatedUtc.UtcDateTime:yyyy-MM-ddTHH:mm:ssZ})"));
+        o.WriteLine(string.Create(CultureInfo.InvariantCulture, $"iteration  {status.Iteration}/{status.TotalIterations} (last iteration {status.LastIterationSeconds:F2} s; updated {UtcText.Format(status.UpdatedUtc)})"));
         o.WriteLine($"checkpoint iteration {status.CheckpointIteration}");
         o.WriteLine($"sources    {string.Join(", ", status.SourcesPerClass.Select(c => $"{c.Key} {c.Value}"))}");
         o.WriteLine($"stored     {string.Join(", ", samples.Select(c => $"{c.Key} {c.Value} samples"))}");

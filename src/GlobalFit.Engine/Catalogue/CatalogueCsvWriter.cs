@@ -54,8 +54,8 @@ public static class CatalogueCsvWriter
         return text.ToString();
     }
 
-    // Round-trip formatting: reading the file back gives the same doubles.
-    private static string Number(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+    // Round-trip formatting (reading the file back gives the same doubles) with two-digit exponents: 7.43e-21.
+    private static string Number(double value) => NumberText.RoundTrip(value);
 
     private static string Quote(string field) =>
         field.AsSpan().IndexOfAny(",\"\n\r") < 0 ? field : "\"" + field.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"";

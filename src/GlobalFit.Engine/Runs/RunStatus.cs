@@ -82,14 +82,14 @@ public sealed record RunStatus
     }
 }
 
-/// <summary>Writes times as UTC ISO 8601 with a <c>Z</c> (<c>2026-12-05T09:08:14.1234567Z</c>), reads any ISO 8601 form.</summary>
+/// <summary>Writes times as <see cref="UtcText"/> does (<c>2026-12-05T09:08:14Z</c>), reads any ISO 8601 form.</summary>
 internal sealed class UtcTimeConverter : JsonConverter<DateTimeOffset>
 {
     public override DateTimeOffset Read(ref Utf8JsonReader reader, Type typeToConvert, JsonSerializerOptions options) =>
         DateTimeOffset.Parse(reader.GetString() ?? "", System.Globalization.CultureInfo.InvariantCulture, System.Globalization.DateTimeStyles.AssumeUniversal);
 
     public override void Write(Utf8JsonWriter writer, DateTimeOffset value, JsonSerializerOptions options) =>
-        writer.WriteStringValue(value.UtcDateTime.ToString("O", System.Globalization.CultureInfo.InvariantCulture));
+        writer.WriteStringValue(UtcText.Format(value));
 }
 
 /// <summary>A stage's slowest worker.</summary>

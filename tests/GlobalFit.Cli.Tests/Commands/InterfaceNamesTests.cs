@@ -35,7 +35,12 @@ public class InterfaceNamesTests
         // Truth and catalogue name the amplitude `amplitude`, and catalogue rows are sources.
         var inspect = JsonDocument.Parse(CliRun.Run("inspect", data, "--json").Out).RootElement;
         Assert.Equal(15.0, inspect.GetProperty("cadence_s").GetDouble());
-        string[] header = CliRun.Run("catalogue", run).Out.Split('\n')[0].Split(',');
+        string csv = CliRun.Run("catalogue", run).Out;
+        string[] header = csv.Split('\n')[0].Split(',');
+        // Item 7: numbers with a lower-case, two-digit exponent (2.5e-22), never .NET's 2.5E-022 or 2.5E-22.
+        Assert.Matches(@"\de-\d\d", csv);
+        Assert.DoesNotContain("E-", csv, StringComparison.Ordinal);
+        Assert.Matches(@"written by .* at \d{4}-\d\d-\d\dT\d\d:\d\d:\d\dZ", CliRun.Run("inspect", data).Out);
         Assert.Contains("amplitude", header);
 
         // Truth and catalogue hold the same parameter columns in the same order, fddot_hz_s2 beside fdot_hz_s.

@@ -28,7 +28,7 @@ public class CatalogueWriterTests
         var lines = CatalogueCsvWriter.Format(Records()).Split('\n');
 
         Assert.Equal("id,class,confidence,snr,f0_hz,f0_hz_lo,f0_hz_hi,amplitude,amplitude_lo,amplitude_hi,mchirp_msun,mchirp_msun_lo,mchirp_msun_hi", lines[0]);
-        Assert.Equal("gb-0001,galactic_binaries,0.75,12.5,0.001,0.0009,0.0011,2E-22,1E-22,3E-22,,,", lines[1]);
+        Assert.Equal("gb-0001,galactic_binaries,0.75,12.5,0.001,0.0009,0.0011,2e-22,1e-22,3e-22,,,", lines[1]);
         Assert.Equal("NaN", lines[2].Split(',')[3]);
         Assert.Equal("mbh-0001,massive_black_hole_binaries,0.5,300,,,,,,,1000000,900000,1200000", lines[3]);
         Assert.Equal("", lines[4]);   // the file ends with a line feed

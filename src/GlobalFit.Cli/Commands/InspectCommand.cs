@@ -65,16 +65,33 @@ public static class InspectCommand
 
     private static void WriteChart(ObservationInspection r, string png)
     {
+        byte[] bytes = Chart(r).ToPng();
+        AtomicFile.Write(png, overwrite: true, stream => stream.Write(bytes));
+    }
+
+    // One colour per channel (blue, orange and green stay apart for the common colour-vision deficiencies); the Welch
+    // estimate solid, the model dashed; the band the statistics compare shaded; the legend beside the data.
+    internal static readonly IReadOnlyDictionary<AetChannel, string> ChannelColors = new Dictionary<AetChannel, string>
+    {
+        [AetChannel.A] = "#1F77B4",
+        [AetChannel.E] = "#FF7F0E",
+        [AetChannel.T] = "#2CA02C",
+    };
+
+    internal static LogLogChart Chart(ObservationInspection r)
+    {
         var chart = new LogLogChart("Welch estimate against the noise model", "frequency [Hz]", "PSD [1/Hz] (fractional frequency)");
+        if (r.Channels.Count > 0)
+            chart.MarkBand(r.Channels[0].BandLowHz, r.Channels[0].BandHighHz,
+                $"band the statistics compare ({NumberText.Significant(r.Channels[0].BandLowHz * 1e3, 3)}–{NumberText.Significant(r.Channels[0].BandHighHz * 1e3, 3)} mHz)");
         var channels = new[] { AetChannel.A, AetChannel.E, AetChannel.T };
         for (int c = 0; c < 3; c++)
         {
             var welch = r.Welch[c];
             var f = welch.FrequenciesHz();
-            chart.AddCurve($"{channels[c]} estimate", f, welch.Psd);
-            chart.AddCurve($"{channels[c]} model", f, f.Select(x => r.Model.Psd(channels[c], x)).ToArray());
+            chart.AddCurve($"{channels[c]} estimate", f, welch.Psd, ChannelColors[channels[c]], dashed: false);
+            chart.AddCurve($"{channels[c]} model", f, f.Select(x => r.Model.Psd(channels[c], x)).ToArray(), ChannelColors[channels[c]], dashed: true);
         }
-        byte[] bytes = chart.ToPng();
-        AtomicFile.Write(png, overwrite: true, stream => stream.Write(bytes));
+        return chart;
     }
 }

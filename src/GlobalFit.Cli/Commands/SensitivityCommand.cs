@@ -85,14 +85,7 @@ public static class SensitivityCommand
         AtomicFile.Write(csvPath, overwrite: true, stream => stream.Write(Encoding.UTF8.GetBytes(table.ToCsv())));
         if (pngPath is not null)
         {
-            var chart = new LogLogChart("Sky-averaged sensitivity", "frequency [Hz]", "strain amplitude spectral density [1/√Hz]");
-            chart.AddCurve("instrument + foreground (exact sky average)", table.FrequencyHz, table.ExactStrainPsd.Select(Math.Sqrt).ToArray());
-            chart.AddCurve("approximate transfer function (Robson et al. 2019)", table.FrequencyHz, table.RobsonStrainPsd.Select(Math.Sqrt).ToArray());
-            if (foreground is not null)
-                // Drawn only where it matters (above 0.1 % of the total); its exponential cut-off would otherwise
-                // stretch the axis over twenty decades.
-                chart.AddCurve("confusion foreground", table.FrequencyHz,
-                    table.ForegroundStrainPsd.Select((s, i) => s > 1e-3 * table.ExactStrainPsd[i] ? Math.Sqrt(s) : double.NaN).ToArray());
+            var chart = Chart(table, foreground is not null);
             byte[] bytes = chart.ToPng();
             AtomicFile.Write(pngPath, overwrite: true, stream => stream.Write(bytes));
         }
@@ -103,7 +96,9 @@ public static class SensitivityCommand
             context.Out.WriteLine(CliJson.Serialize(new Dictionary<string, object?>
             {
                 ["csv"] = csvPath,
+                ["csv_holds"] = CsvHolds,
                 ["png"] = pngPath,
+                ["png_holds"] = pngPath is null ? null : ChartHolds,
                 ["foreground_fit_years"] = foreground?.ObservationYears,
                 ["acceleration_asd"] = instrument.AccelerationAsd,
                 ["oms_asd"] = instrument.OmsAsd,
@@ -115,11 +110,30 @@ public static class SensitivityCommand
         else
         {
             context.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"wrote {r.Points} frequencies from {NumberText.Significant(r.FMin, 3)} to {NumberText.Significant(r.FMax, 3)} Hz to {csvPath}"));
-            if (pngPath is not null) context.Out.WriteLine($"wrote chart to {pngPath}");
+                $"wrote {r.Points} frequencies from {NumberText.Significant(r.FMin, 3)} to {NumberText.Significant(r.FMax, 3)} Hz to {csvPath}: {CsvHolds}"));
+            if (pngPath is not null) context.Out.WriteLine($"wrote chart to {pngPath}: {ChartHolds}");
             context.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"most sensitive at {fBest * 1e3:F2} mHz: sqrt(S_n) = {NumberText.Scientific(Math.Sqrt(sBest), 2)} /sqrt(Hz)"));
         }
         return ExitCodes.Success;
+    }
+
+    /// <summary>What the CSV holds, as the command says it.</summary>
+    internal const string CsvHolds = "power spectral densities (PSD, 1/Hz; strain PSDs S_n and A/E/T PSDs in fractional frequency)";
+
+    /// <summary>What the chart holds, as the command and the chart say it.</summary>
+    internal const string ChartHolds = "strain amplitude spectral densities (ASD = sqrt(PSD), 1/sqrt(Hz))";
+
+    internal static LogLogChart Chart(SensitivityTable table, bool withForeground)
+    {
+        var chart = new LogLogChart("Sky-averaged sensitivity: strain ASD = √PSD", "frequency [Hz]", "strain ASD √S_n [1/√Hz]");
+        chart.AddCurve("ASD, instrument + foreground (exact sky average)", table.FrequencyHz, table.ExactStrainPsd.Select(Math.Sqrt).ToArray());
+        chart.AddCurve("ASD, approximate transfer function (Robson et al. 2019)", table.FrequencyHz, table.RobsonStrainPsd.Select(Math.Sqrt).ToArray());
+        if (withForeground)
+            // Drawn only where it matters (above 0.1 % of the total); its exponential cut-off would otherwise
+            // stretch the axis over twenty decades.
+            chart.AddCurve("ASD, confusion foreground", table.FrequencyHz,
+                table.ForegroundStrainPsd.Select((s, i) => s > 1e-3 * table.ExactStrainPsd[i] ? Math.Sqrt(s) : double.NaN).ToArray());
+        return chart;
     }
 }

@@ -59,6 +59,9 @@ public class InterfaceNamesTests
         Assert.Equal(file.EnumerateObject().Select(p => p.Name).Order(), printed.EnumerateObject().Select(p => p.Name).Order());
         Assert.Contains("last_iteration_s", printed.EnumerateObject().Select(p => p.Name));
         Assert.EndsWith("Z", printed.GetProperty("updated_utc").GetString(), StringComparison.Ordinal);
+        var span = File.ReadLines(Path.Combine(run, "telemetry.jsonl")).Select(l => JsonDocument.Parse(l).RootElement)
+            .First(e => e.GetProperty("kind").GetString() == "span");
+        Assert.EndsWith("Z", span.GetProperty("start_utc").GetString(), StringComparison.Ordinal);
         var times = printed.GetProperty("slowest_workers").EnumerateArray().Select(w => w.GetProperty("compute_ms").GetDouble()).ToList();
         Assert.NotEmpty(times);
         Assert.Equal(times.OrderDescending(), times);

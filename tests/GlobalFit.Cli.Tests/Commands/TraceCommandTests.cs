@@ -73,6 +73,7 @@ public class TraceCommandTests
         using var json = JsonDocument.Parse(result.Out);
         var iteration = Assert.Single(json.RootElement.GetProperty("iterations").EnumerateArray());
         Assert.Equal(2, iteration.GetProperty("iteration").GetInt64());
+        Assert.Equal("2026-12-01T10:00:02Z", iteration.GetProperty("start_utc").GetString()); // UTC with Z, as everywhere
         var stage = iteration.GetProperty("stages")[0];
         Assert.Equal(1, stage.GetProperty("stage").GetInt32());
         Assert.Equal("galactic_binaries/0000", stage.GetProperty("last_worker").GetString());

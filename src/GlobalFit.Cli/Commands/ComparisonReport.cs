@@ -29,7 +29,7 @@ internal static class ComparisonReport
                 o.WriteLine("    truth          source     SNR inj  SNR fit  conf  overlap  " + string.Join(" ", r.ParameterColumns.Select(c => Short(c).PadLeft(7))));
                 foreach (var f in r.Found)
                     o.WriteLine(I($"    {f.TruthId,-14} {f.SourceId,-10} {f.InjectedSnr,7:F1}  {f.SourceSnr,7:F1}  {f.Confidence,4:F2}  {f.Overlap,7:F2}  ")
-                        + string.Join(" ", f.ErrorsInSigma.Select(e => (double.IsNaN(e) ? "-" : (Math.Round(e, 1) == 0 ? 0.0 : e).ToString("+0.0;-0.0;0.0", CultureInfo.InvariantCulture)).PadLeft(7))));
+                        + string.Join(" ", f.ErrorsInSigma.Select(e => SigmaText(e).PadLeft(7))));
             }
             foreach (var m in r.Missed)
                 o.WriteLine(I($"  missed {m.TruthId}, SNR {m.InjectedSnr:F1}: ") + Parameters(r.ParameterColumns, m.Parameters));
@@ -81,6 +81,12 @@ internal static class ComparisonReport
             }).ToList(),
         }).ToList(),
     };
+
+    // Errors in σ to one decimal; beyond ±9999.9 (an interval of almost no width) in exponent form, which keeps the column.
+    internal static string SigmaText(double error) =>
+        double.IsNaN(error) ? "-"
+        : Math.Abs(error) >= 9999.95 ? (error > 0 ? "+" : "") + NumberText.Significant(error, 1)
+        : (Math.Round(error, 1) == 0 ? 0.0 : error).ToString("+0.0;-0.0;0.0", CultureInfo.InvariantCulture);
 
     private static string Parameters(ImmutableArray<string> columns, ImmutableArray<double> values) =>
         string.Join(", ", columns.Select((c, i) => $"{c} {NumberText.Significant(values[i], 4)}"));

@@ -23,6 +23,7 @@ public static class CommandLineApp
             ResumeCommand.Create(context),
             StatusCommand.Create(context),
             CatalogueCommand.Create(context),
+            CompareCommand.Create(context),
             TraceCommand.Create(context),
             DemoCommand.Create(context),
             BenchCommand.Create(context),
@@ -47,6 +48,11 @@ public static class CommandLineApp
         {
             context.Error.WriteLine($"error: {e.Message}");
             return ExitCodes.BadInput;
+        }
+        catch (FileWriteException e)
+        {
+            context.Error.WriteLine($"error: {e.Message}");
+            return ExitCodes.WriteFailed;
         }
         catch (OperationCanceledException)
         {

@@ -7,6 +7,7 @@ public static class WriteFaults
 {
     private static long _remaining = -1;
     private static long _written;
+    private static string? _firstFailure;
 
     /// <summary>True while a fault is injected.</summary>
     public static bool Active => Interlocked.Read(ref _remaining) >= 0;
@@ -20,6 +21,7 @@ public static class WriteFaults
     {
         ArgumentOutOfRangeException.ThrowIfNegative(bytes);
         Interlocked.Exchange(ref _written, 0);
+        Interlocked.Exchange(ref _firstFailure, null);
         Interlocked.Exchange(ref _remaining, bytes);
         return new Reset();
     }
@@ -42,7 +44,14 @@ public static class WriteFaults
         }
     }
 
-    internal static IOException DiskFull() => new("No space left on device", unchecked((int)0x8007001C));
+    internal static IOException DiskFull(string path)
+    {
+        Interlocked.CompareExchange(ref _firstFailure, path, null);
+        return new IOException("No space left on device", unchecked((int)0x8007001C));
+    }
+
+    /// <summary>The file whose write failed first since the last <see cref="Inject"/>, or null.</summary>
+    public static string? FirstFailure => Volatile.Read(ref _firstFailure);
 
     private sealed class Reset : IDisposable
     {

@@ -6,34 +6,66 @@ namespace GlobalFit.Physics.Files;
 public static class WriteStreams
 {
     /// <summary>Opens <paramref name="path"/> for writing as <see cref="FileStream"/> would.</summary>
-    public static FileStream Open(string path, FileMode mode, FileAccess access, FileShare share) =>
-        WriteFaults.Active ? new FaultyFileStream(path, mode, access, share) : new FileStream(path, mode, access, share);
-
-    // Writes what the remaining budget allows, then fails as a full disk does.
-    private sealed class FaultyFileStream(string path, FileMode mode, FileAccess access, FileShare share)
-        : FileStream(path, mode, access, share)
+    public static Stream Open(string path, FileMode mode, FileAccess access, FileShare share)
     {
+        var file = new FileStream(path, mode, access, share);
+        return WriteFaults.Active ? new FaultyStream(file) : file;
+    }
+
+    /// <summary>Flushes <paramref name="stream"/> (opened by <see cref="Open"/>) through to the disk.</summary>
+    public static void FlushToDisk(Stream stream)
+    {
+        ArgumentNullException.ThrowIfNull(stream);
+        switch (stream)
+        {
+            case FileStream file: file.Flush(flushToDisk: true); break;
+            case FaultyStream faulty: faulty.File.Flush(flushToDisk: true); break;
+            default: stream.Flush(); break;
+        }
+    }
+
+    // Passes writes to the file while the budget lasts, then writes what is left of it and fails as a full disk does.
+    private sealed class FaultyStream(FileStream file) : Stream
+    {
+        public FileStream File { get; } = file;
+
+        public override bool CanRead => File.CanRead;
+
+        public override bool CanSeek => File.CanSeek;
+
+        public override bool CanWrite => File.CanWrite;
+
+        public override long Length => File.Length;
+
+        public override long Position
+        {
+            get => File.Position;
+            set => File.Position = value;
+        }
+
+        public override void Flush() => File.Flush();
+
+        public override int Read(byte[] buffer, int offset, int count) => File.Read(buffer, offset, count);
+
+        public override long Seek(long offset, SeekOrigin origin) => File.Seek(offset, origin);
+
+        public override void SetLength(long value) => File.SetLength(value);
+
         public override void Write(byte[] buffer, int offset, int count) => Write(buffer.AsSpan(offset, count));
 
         public override void Write(ReadOnlySpan<byte> buffer)
         {
             int allowed = WriteFaults.Take(buffer.Length);
-            base.Write(buffer[..allowed]);
-            if (allowed < buffer.Length) throw WriteFaults.DiskFull();
+            File.Write(buffer[..allowed]);
+            if (allowed < buffer.Length) throw WriteFaults.DiskFull(File.Name);
         }
 
         public override void WriteByte(byte value) => Write([value]);
 
-        public override Task WriteAsync(byte[] buffer, int offset, int count, CancellationToken cancellationToken)
+        protected override void Dispose(bool disposing)
         {
-            Write(buffer, offset, count);
-            return Task.CompletedTask;
-        }
-
-        public override ValueTask WriteAsync(ReadOnlyMemory<byte> buffer, CancellationToken cancellationToken = default)
-        {
-            Write(buffer.Span);
-            return ValueTask.CompletedTask;
+            if (disposing) File.Dispose();
+            base.Dispose(disposing);
         }
     }
 }

@@ -6,8 +6,8 @@ using Xunit.Abstractions;
 namespace GlobalFit.Cli.Tests.Faults;
 
 /// <summary>A disk that fills up at any byte of any write site of <c>simulate</c>, <c>catalogue</c> and <c>fit</c>
-/// (run files, samples, checkpoints, status, telemetry, the final catalogue) stops the command cleanly: a documented
-/// non-zero exit (2 before a fit starts, 4 once it runs), one line naming the file and the cause, no temporary file left,
+/// (run files, samples, checkpoints, status, telemetry, the final catalogue) stops the command cleanly: exit 4 (a file
+/// could not be written), one line naming the file and the cause, no temporary file left,
 /// nothing half-written in place of a good file, and every checkpoint left behind intact.</summary>
 /// <remarks>Each command is first run with byte counting to learn how much it writes in total, then rerun with the
 /// disk filling at points spread over that total, so every write site is reached whatever the order of the writes.</remarks>
@@ -28,7 +28,7 @@ public sealed class DiskFullTests(ITestOutputHelper output)
         foreach (long budget in Budgets(total))
         {
             var result = Fill(budget, () => CliRun.Run("simulate", scenario, "--out", data));
-            ExpectCleanStop(result, budget, [ExitCodes.BadInput], data);
+            ExpectCleanStop(result, budget, [ExitCodes.WriteFailed], data);
             Assert.False(File.Exists(data));
             Assert.Equal(["scenario.toml"], Directory.GetFiles(folder.Path).Select(Path.GetFileName));
         }
@@ -48,7 +48,7 @@ public sealed class DiskFullTests(ITestOutputHelper output)
         foreach (long budget in Budgets(total))
         {
             var result = Fill(budget, () => CliRun.Run("catalogue", run, "--format", format, "--out", target, "--force"));
-            ExpectCleanStop(result, budget, [ExitCodes.BadInput], target);
+            ExpectCleanStop(result, budget, [ExitCodes.WriteFailed], target);
             Assert.Equal(previous, File.ReadAllBytes(target)); // the earlier export is untouched
             Assert.Empty(Directory.GetFiles(folder.Path, "*.tmp"));
         }
@@ -65,18 +65,36 @@ public sealed class DiskFullTests(ITestOutputHelper output)
         {
             string run = folder.File($"run{n++}");
             var result = Fill(budget, () => CliRun.Run("fit", FitConfig(folder, data, run)));
-            ExpectCleanStop(result, budget, [ExitCodes.BadInput, ExitCodes.WriteFailed], null);
+            // A fit's telemetry varies in length with timing, so the last fill points may lie beyond what this run wrote.
+            if (WriteFaults.FirstFailure is null)
+            {
+                Assert.Equal(0, result.ExitCode);
+                continue;
+            }
+            if (WriteFaults.FirstFailure.EndsWith("telemetry.jsonl", StringComparison.Ordinal) && result.ExitCode == 0)
+            {
+                // Telemetry is diagnostics: losing it does not stop a fit whose samples and checkpoints are safe, but
+                // it is reported.
+                Assert.Contains("warning: telemetry could not be written", result.Error, StringComparison.Ordinal);
+                continue;
+            }
+            ExpectCleanStop(result, budget, [ExitCodes.WriteFailed], null);
             if (!Directory.Exists(run)) continue;
             Assert.Empty(Directory.GetFiles(run, "*.tmp", SearchOption.AllDirectories));
             if (CheckpointFile.Exists(run)) Assert.True(CheckpointFile.Read(run, _ => { }).Iteration >= 1);
-            if (result.ExitCode == ExitCodes.WriteFailed)
-                Assert.Contains("\"stopped (error)\"", File.ReadAllText(Path.Combine(run, "status.json")), StringComparison.Ordinal);
+            // Once the fit has written its status, the run is reported as stopped, never as still running (the status
+            // file itself may be the write that failed, so the report rests on the lock the process released).
+            if (File.Exists(Path.Combine(run, "status.json")))
+            {
+                var status = CliRun.Run("status", run, "--json");
+                Assert.NotEqual("running", System.Text.Json.JsonDocument.Parse(status.Out).RootElement.GetProperty("state").GetString());
+            }
         }
     }
 
     private void ExpectCleanStop(CliResult result, long budget, int[] codes, string? namedFile)
     {
-        output.WriteLine($"disk full after {budget} bytes: exit {result.ExitCode}: {result.Error.Trim()}");
+        output.WriteLine($"disk full after {budget} bytes ({WriteFaults.FirstFailure}): exit {result.ExitCode}: {result.Error.Trim()}");
         Assert.True(codes.Contains(result.ExitCode), $"after {budget} bytes: exit {result.ExitCode}: {result.Error}");
         string line = Assert.Single(result.Error.Split('\n', StringSplitOptions.RemoveEmptyEntries), l => l.StartsWith("error:", StringComparison.Ordinal));
         Assert.Contains("No space left on device", line, StringComparison.Ordinal);
@@ -101,7 +119,7 @@ public sealed class DiskFullTests(ITestOutputHelper output)
         using (WriteFaults.Inject(budget))
         {
             var task = Task.Run(run);
-            Assert.True(task.Wait(TimeSpan.FromMinutes(2)), $"still running two minutes after the disk filled at byte {budget}");
+            Assert.True(task.Wait(TimeSpan.FromMinutes(2)), $"still running two minutes after the disk filled at byte {budget} (first failed write: {WriteFaults.FirstFailure})");
             return task.Result;
         }
     }
@@ -121,7 +139,7 @@ public sealed class DiskFullTests(ITestOutputHelper output)
     }
 
     private static string FitConfig(TempFolder folder, string data, string run) =>
-        folder.Write("fit.toml", $"data = \"{data}\"\nrun_folder = \"{run}\"\niterations = 3\ncheckpoint_every = 1\n[noise]\nsteps_per_update = 5\n");
+        folder.Write("fit.toml", $"data = \"{data}\"\nrun_folder = \"{run}\"\niterations = 3\ncheckpoint_every_iterations = 1\n[noise]\nsteps_per_update = 5\n");
 }
 
 /// <summary>Fault tests change process-wide file behaviour and so run alone.</summary>

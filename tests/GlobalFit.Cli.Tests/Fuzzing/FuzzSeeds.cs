@@ -20,7 +20,7 @@ public sealed class FuzzSeeds : IDisposable
             id = "loud"
             f0_hz = 3.1e-3
             fdot_hz_s = 0
-            amp = 2e-21
+            amplitude = 2e-21
             beta_rad = 0.3
             lambda_rad = 1.2
             iota_rad = 0.9
@@ -33,7 +33,7 @@ public sealed class FuzzSeeds : IDisposable
             data = "{data}"
             run_folder = "{RunFolder}"
             iterations = 3
-            checkpoint_every = 1
+            checkpoint_every_iterations = 1
             [galactic_binaries]
             f_min_hz = 3.0e-3
             f_max_hz = 3.4e-3
@@ -46,7 +46,7 @@ public sealed class FuzzSeeds : IDisposable
         Expect(CliRun.Run("fit", config));
         ObservationFile = File.ReadAllBytes(data);
         Checkpoints = [File.ReadAllBytes(CheckpointFile.LatestPath(RunFolder)), File.ReadAllBytes(CheckpointFile.PreviousPath(RunFolder))];
-        string samples = Path.Combine(RunFolder, SampleStore.ChainsFolderName);
+        string samples = Path.Combine(RunFolder, SampleStore.SamplesFolderName);
         SampleFiles = Directory.GetFiles(samples, "*" + WorkerFileName.Extension).Order(StringComparer.Ordinal)
             .Select(f => (Path.GetFileName(f), File.ReadAllBytes(f))).ToList();
         CommitRecord = File.ReadAllBytes(Path.Combine(samples, CommitManifest.FileName));

@@ -90,7 +90,7 @@ internal sealed class ReaderTargets(FuzzSeeds seeds, TempFolder scratch)
     private string SampleRun(byte[] firstWorkerFile, byte[] commitRecord)
     {
         string run = Path.Combine(scratch.Path, "samples-run");
-        string folder = Path.Combine(run, SampleStore.ChainsFolderName);
+        string folder = Path.Combine(run, SampleStore.SamplesFolderName);
         if (Directory.Exists(folder)) Directory.Delete(folder, recursive: true);
         Directory.CreateDirectory(folder);
         for (int i = 0; i < seeds.SampleFiles.Count; i++)

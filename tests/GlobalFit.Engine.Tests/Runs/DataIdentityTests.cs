@@ -124,7 +124,7 @@ public sealed class DataIdentityTests(SharedFitData data) : IClassFixture<Shared
             data = "{dataPath}"
             run_folder = "{run}"
             iterations = {iterations}
-            checkpoint_every = 1
+            checkpoint_every_iterations = 1
             [noise]
             steps_per_update = 5
             """);

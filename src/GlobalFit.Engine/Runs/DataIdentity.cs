@@ -54,7 +54,7 @@ public sealed record DataIdentity(long SizeBytes, string Sha256)
         ArgumentNullException.ThrowIfNull(layout);
         string path = layout.DataIdentityFile;
         if (!File.Exists(path)) return null;
-        string[] lines = File.ReadAllText(path, Encoding.UTF8).Split('\n');
+        string[] lines = TextFile.ReadUtf8(path).Split('\n');
         if (lines.Length < 3 || lines[0] != FirstLine)
             throw new InvalidInputException(path, "line 1", $"is not a data identity record (expected the first line '{FirstLine}')");
         if (!lines[1].StartsWith("size_bytes ", StringComparison.Ordinal)

@@ -126,7 +126,10 @@ public static partial class FitRunner
         var store = system.ActorOf(SampleStoreActor.Props(new SampleStore(layout.Root)), "sample-store");
         var checkpointer = system.ActorOf(CheckpointerActor.Props(layout.Root), "checkpointer");
         var setup = new CoordinatorSetup(plan.StagePlan(digest), start, plan.Workers.ToDictionary(w => w.Id, w => w.Label, StringComparer.Ordinal),
-            settings.Threads, residual, store, checkpointer, progress, LoadOnce);
+            settings.Threads, residual, store, checkpointer, progress, LoadOnce)
+        {
+            RecordFailure = new WorkerFailureLog(layout.WorkerFailureLog).Record,
+        };
         var coordinator = system.ActorOf(FitCoordinator.Props(setup), "fit-coordinator");
         using var stop = options.Cancellation.Register(() => coordinator.Tell(new StopFit()));
         var finished = coordinator.Ask<FitFinished>(new StartFit(), Timeout.InfiniteTimeSpan).GetAwaiter().GetResult();

@@ -87,7 +87,7 @@ public static partial class FitRunner
         var store = new SampleStore(layout.Root);
         if (CheckpointFile.Exists(layout.Root))
         {
-            start = FitPosition.From(CheckpointFile.Read(layout.Root, options.Progress.Warning, digest));
+            start = CheckedPosition(CheckpointFile.Read(layout.Root, options.Progress.Warning, digest), plan, layout.Root);
             // Samples of iterations up to the checkpoint must all be in the store: resuming past a gap would leave it
             // out of the catalogue without a word.
             long committed = store.CommittedIteration;
@@ -116,7 +116,14 @@ public static partial class FitRunner
         var psd = InversePsd.From((IPsdSource)prebuilt, plan.Shape.BinCount);
         IFitWorker LoadOnce(string id, byte[]? state) => id == noiseId && Interlocked.Exchange(ref prebuilt, null) is { } built ? built : Load(id, state);
         var book = new ResidualBook(data, plan.Workers, psd.A, psd.E, psd.T);
-        foreach (var (id, template) in start.Templates) book.Replace(id, template);
+        try
+        {
+            foreach (var (id, template) in start.Templates) book.Replace(id, template);
+        }
+        catch (ArgumentException e)
+        {
+            throw new InvalidInputException(CheckpointFile.LatestPath(layout.Root), null, $"the checkpoint's templates do not fit this run: {e.Message}", e);
+        }
         var progress = new StatusRecordingProgress(options.Progress, layout, start.CheckpointIteration);
         progress.WriteState("running", start.Iteration, settings.Iterations, "");
 
@@ -142,6 +149,26 @@ public static partial class FitRunner
         return outcome.Kind == FitOutcomeKind.Completed
             ? outcome with { Catalogue = RunCatalogue.Export(plan, layout, options.Progress.Warning) }
             : outcome;
+    }
+
+    // A checkpoint that passed its checksum can still be inconsistent with the run (written by a damaged program, or
+    // sealed by hand): every worker of the plan exactly once, nothing else, and templates that are whole.
+    internal static FitPosition CheckedPosition(Checkpoints.RunCheckpoint checkpoint, RunPlan plan, string runFolder)
+    {
+        string path = CheckpointFile.LatestPath(runFolder);
+        FitPosition position;
+        try
+        {
+            position = FitPosition.From(checkpoint);
+        }
+        catch (ArgumentException e)
+        {
+            throw new InvalidInputException(path, null, $"the checkpoint is inconsistent: {e.Message}", e);
+        }
+        var planned = plan.Workers.Select(w => w.Id).ToHashSet(StringComparer.Ordinal);
+        if (checkpoint.Workers.Length != planned.Count || !position.WorkerStates.Keys.All(planned.Contains))
+            throw new InvalidInputException(path, null, $"the checkpoint holds {checkpoint.Workers.Length} worker states that do not match the run's {planned.Count} workers");
+        return position;
     }
 
     private static FitData LoadData(RunPlan plan, IFitProgress progress)

@@ -26,9 +26,35 @@ public static class RunCatalogue
         long burn = burnIn ?? plan.Settings.BurnIn;
         double confidence = minConfidence ?? plan.Settings.MinConfidence;
         var catalogues = plan.Classes.ToDictionary(c => c.ClassId, c => c.CreateCatalogue(noise, burn, confidence), StringComparer.Ordinal);
-        foreach (var block in new SampleStore(layout.Root).ReadAll())
-            if (catalogues.TryGetValue(block.ClassId, out var catalogue)) catalogue.Add(block);
-        return [.. plan.Classes.SelectMany(c => catalogues[c.ClassId].Build())];
+        var store = new SampleStore(layout.Root);
+        // A record can pass its checksum and shape checks yet hold what its class cannot use (a renamed column, a
+        // frequency out of band): that is damaged input, reported with its file, not a crash.
+        foreach (var block in store.ReadAll())
+        {
+            if (!catalogues.TryGetValue(block.ClassId, out var catalogue)) continue;
+            try
+            {
+                catalogue.Add(block);
+            }
+            catch (ArgumentException e)
+            {
+                throw new InvalidInputException(Path.Combine(store.SamplesFolder, WorkerFileName.FromWorkerId(block.WorkerId)),
+                    $"iteration {block.Iteration}", $"the stored samples do not fit class {block.ClassId}: {e.Message}", e);
+            }
+        }
+        return [.. plan.Classes.SelectMany(c => BuildClass(catalogues[c.ClassId], c.ClassId, store))];
+    }
+
+    private static IEnumerable<CatalogueRecord> BuildClass(IClassCatalogue catalogue, string classId, SampleStore store)
+    {
+        try
+        {
+            return catalogue.Build();
+        }
+        catch (ArgumentException e)
+        {
+            throw new InvalidInputException(store.SamplesFolder, null, $"the stored samples of class {classId} hold values it cannot use: {e.Message}", e);
+        }
     }
 
     /// <summary>Builds the catalogue and writes <c>catalogue.csv</c> and <c>catalogue.h5</c> into the run folder.</summary>

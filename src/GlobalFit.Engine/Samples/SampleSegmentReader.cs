@@ -41,6 +41,8 @@ internal static class SampleSegmentReader
             if (Crc32.Compute(payload) != expectedCrc)
                 throw new InvalidInputException(path, location, "checksum mismatch: the record is damaged");
             var block = Decode(payload, path, location);
+            if (SampleStore.ShapeProblem(block) is { } inconsistent)
+                throw new InvalidInputException(path, location, $"the checksum matches but the record is inconsistent: {inconsistent}");
             if (block.WorkerId != workerId)
                 throw new InvalidInputException(path, location, $"the record belongs to worker '{block.WorkerId}', not to '{workerId}' as the file name says");
             if (block.Iteration <= previousIteration)

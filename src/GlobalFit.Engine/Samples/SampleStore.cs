@@ -216,17 +216,26 @@ public sealed class SampleStore
 
     private static void CheckShape(SampleBlock block)
     {
-        ArgumentException.ThrowIfNullOrEmpty(block.WorkerId, nameof(block.WorkerId));
+        if (ShapeProblem(block) is { } problem) throw new ArgumentException(problem, nameof(block));
+    }
+
+    /// <summary>What is inconsistent in <paramref name="block"/> (a missing worker id or array, a negative source count,
+    /// a value count not matching its sources and parameters), or null: checked on writing, and again on reading, where a
+    /// record can be well-formed yet inconsistent.</summary>
+    internal static string? ShapeProblem(SampleBlock block)
+    {
+        if (string.IsNullOrEmpty(block.WorkerId)) return "the block has no worker id";
         if (block.ParameterNames is null || block.SourcesPerSample is null || block.Values is null || block.LogLikelihoods is null)
-            throw new ArgumentException($"the block of worker {block.WorkerId} has a null array");
+            return $"the block of worker {block.WorkerId} has a null array";
         long sources = 0;
         foreach (int count in block.SourcesPerSample)
         {
-            if (count < 0) throw new ArgumentException($"the block of worker {block.WorkerId} has a negative source count");
+            if (count < 0) return $"the block of worker {block.WorkerId} has a negative source count";
             sources += count;
         }
         if (sources * block.ParameterNames.Length != block.Values.Length || block.LogLikelihoods.Length != block.SampleCount)
-            throw new ArgumentException($"the block of worker {block.WorkerId}, iteration {block.Iteration}: {block.Values.Length} values and {block.LogLikelihoods.Length} log-likelihoods do not fit {sources} sources of {block.ParameterNames.Length} parameters in {block.SampleCount} samples");
+            return $"the block of worker {block.WorkerId}, iteration {block.Iteration}: {block.Values.Length} values and {block.LogLikelihoods.Length} log-likelihoods do not fit {sources} sources of {block.ParameterNames.Length} parameters in {block.SampleCount} samples";
+        return null;
     }
 
     private static long AppendRecord(string path, long committedLength, byte[] record)

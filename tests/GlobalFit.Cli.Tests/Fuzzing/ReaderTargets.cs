@@ -55,6 +55,7 @@ internal sealed class ReaderTargets(FuzzSeeds seeds, TempFolder scratch)
         Directory.CreateDirectory(CheckpointFile.Folder(run));
         File.WriteAllBytes(CheckpointFile.LatestPath(run), bytes);
         var checkpoint = CheckpointFile.Read(run, _ => { });
+        FitRunner.CheckedPosition(checkpoint, _plan.Value, run); // what resume does next with it
         return Convert.ToHexString(SHA256.HashData(MessagePackSerializer.Serialize(checkpoint)));
     }, ResealCheckpoint);
 
@@ -64,7 +65,10 @@ internal sealed class ReaderTargets(FuzzSeeds seeds, TempFolder scratch)
         ByteMutations.Mutate(seed, seeds.SampleFiles[random.Next(seeds.SampleFiles.Count)].Bytes, random), bytes =>
     {
         string run = SampleRun(bytes, seeds.CommitRecord);
-        return Fingerprint(new SampleStore(run).ReadAll());
+        string fingerprint = Fingerprint(new SampleStore(run).ReadAll());
+        // What reads the samples after the store: the catalogue of every class, from a record that passed the checks.
+        RunCatalogue.Build(_plan.Value, new RunFolderLayout(run), _ => { });
+        return fingerprint;
     }, ResealSampleRecords);
 
     public FuzzTarget CommitRecord => new("sample commit record", [seeds.CommitRecord], TextMutations.Mutate, bytes =>
@@ -87,9 +91,18 @@ internal sealed class ReaderTargets(FuzzSeeds seeds, TempFolder scratch)
         return path;
     }
 
+    private readonly Lazy<RunPlan> _plan = new(() => RunPlan.Load(new RunFolderLayout(seeds.RunFolder).ResolvedConfig));
+
     private string SampleRun(byte[] firstWorkerFile, byte[] commitRecord)
     {
         string run = Path.Combine(scratch.Path, "samples-run");
+        string checkpoints = CheckpointFile.Folder(run);
+        if (!Directory.Exists(checkpoints))
+        {
+            // The catalogue takes the noise model of the latest checkpoint.
+            Directory.CreateDirectory(checkpoints);
+            File.Copy(CheckpointFile.LatestPath(seeds.RunFolder), CheckpointFile.LatestPath(run));
+        }
         string folder = Path.Combine(run, SampleStore.SamplesFolderName);
         if (Directory.Exists(folder)) Directory.Delete(folder, recursive: true);
         Directory.CreateDirectory(folder);

@@ -8,12 +8,12 @@ namespace GlobalFit.Engine.Tests.SourceClasses.MassiveBlackHoleBinaries;
 public class MassiveBlackHoleBinaryClassTests(ITestOutputHelper output)
 {
     [Fact]
-    public void The_class_is_registered_after_galactic_binaries_with_its_columns_and_simulation()
+    public void The_class_is_registered_after_galactic_binaries_with_its_columns_simulation_and_demo_part()
     {
         Assert.Equal(["galactic_binaries", MassiveBlackHoleBinaryClass.Id, "extreme_mass_ratio_inspirals", "noise"], SourceClassRegistry.Default.Ids);
         var module = SourceClassRegistry.Default.Find(MassiveBlackHoleBinaryClass.Id)!;
         Assert.Equal(MassiveBlackHoleBinaryParameters.ColumnNames, module.ParameterColumns);
-        Assert.Null(module.Demo);
+        Assert.NotNull(module.Demo);
         Assert.NotNull(module.Simulation);
     }
 

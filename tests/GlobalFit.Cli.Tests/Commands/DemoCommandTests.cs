@@ -14,6 +14,7 @@ public class DemoCommandTests
         Assert.Equal(0, first.ExitCode);
         Assert.Contains("mean estimate/model", first.Out);
         Assert.Matches(@"injected with SNR >= 7; found \d+, missed \d+; \d+ catalogue entries, \d+ spurious", first.Out);
+        Assert.Matches(@"massive black-hole binaries: 1 injected with SNR >= 8; found \d, missed \d; \d rows", first.Out);
         foreach (string file in new[] { "data.h5", "noise.png", "fit.toml", "run/run.toml", "run/catalogue.csv", "run/catalogue.h5", "run/telemetry.jsonl" })
             Assert.True(File.Exists(Path.Combine(demo, file)), file);
         Assert.Equal(0, CliRun.Run("demo", "--out", demo, "--iterations", "2").ExitCode);

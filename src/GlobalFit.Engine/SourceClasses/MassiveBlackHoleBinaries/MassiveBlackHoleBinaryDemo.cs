@@ -6,8 +6,11 @@ using GlobalFit.Physics.MassiveBlackHoleBinaries;
 
 namespace GlobalFit.Engine.SourceClasses.MassiveBlackHoleBinaries;
 
-/// <summary>The massive black-hole binary of the built-in demo: one invented binary (about 10⁶ M☉ detector-frame total mass,
-/// z ≈ 3) merging on day 20 of the month, one worker to find and fit it, and the comparison of its row with the truth.</summary>
+/// <summary>The massive black-hole binary of the built-in demo: one invented binary (about 10⁶ M☉ detector-frame total mass at
+/// 10⁵ Mpc, SNR about 150) merging on day 20 of the month, one worker to find and fit it, and the comparison of its row with
+/// the truth.</summary>
+/// <remarks>The distance keeps the chirp's share of each galactic-binary window small: in the first iteration the
+/// galactic-binary stages run before the binary is found and see its whole signal.</remarks>
 internal sealed class MassiveBlackHoleBinaryDemo : IDemoPart
 {
     /// <summary>Largest |median − truth| of t_c for a row to be the injected binary's: a day, far wider than the posterior
@@ -25,7 +28,7 @@ internal sealed class MassiveBlackHoleBinaryDemo : IDemoPart
         spin1 = 0.4
         spin2 = -0.1
         tc_s = 1.728e6
-        distance_mpc = 2.5e4
+        distance_mpc = 1.0e5
         beta_rad = 0.6
         lambda_rad = 2.2
         iota_rad = 1.1

@@ -132,7 +132,7 @@ public sealed class MassiveBlackHoleBinaryFitWorker : IFitWorker
         }
         var target = new MassiveBlackHoleBinaryTarget(prior, likelihood);
         var fisher = new LazyFisher(() => new ReferenceFisher(_generator, data, reference));
-        var samplerSettings = SamplerSettings(state.RunSeed, fisher);
+        var samplerSettings = SamplerSettings(_settings, state.RunSeed, StreamBase + (ulong)_index, fisher, _orbits);
         var saved = state.Sampler is { } previous ? Rescored(target, previous) : Fresh(target, samplerSettings, state.Reference);
         var sampler = ParallelTemperingSampler<MassiveBlackHoleBinaryTarget>.Resume(target, samplerSettings, saved);
         var collector = new SampleCollector(_settings.SampleInterval, sampler.Step);
@@ -191,18 +191,20 @@ public sealed class MassiveBlackHoleBinaryFitWorker : IFitWorker
         return template;
     }
 
-    private ParallelTemperingSettings SamplerSettings(ulong runSeed, LazyFisher fisher) => new()
+    /// <summary>The sampler settings of a worker (also used by the coverage tests, so they test what the fit runs).</summary>
+    internal static ParallelTemperingSettings SamplerSettings(MassiveBlackHoleBinaryFitSettings settings, ulong runSeed, ulong streamId,
+        Inference.Targets.IFisherInformation fisher, IConstellationOrbits orbits) => new()
     {
-        Tempering = new TemperingSettings { TemperatureCount = _settings.Temperatures, MaxTemperature = _settings.MaxTemperature },
+        Tempering = new TemperingSettings { TemperatureCount = settings.Temperatures, MaxTemperature = settings.MaxTemperature },
         Proposals =
         [
             ProposalSpec.FisherEigen(0.4, fisher, FisherRefreshInterval),
             ProposalSpec.DifferentialEvolution(0.3),
             ProposalSpec.AdaptiveGaussian(0.2),
-            new ProposalSpec(SkyReflectionProposal.Name, 0.1, _ => new SkyReflectionProposal(_orbits)),
+            new ProposalSpec(SkyReflectionProposal.Name, 0.1, _ => new SkyReflectionProposal(orbits)),
         ],
         Seed = runSeed,
-        StreamId = StreamBase + (ulong)_index,
+        StreamId = streamId,
     };
 
     // A new sampler draws its chains from the prior; every chain is moved to the seed instead.

@@ -16,7 +16,7 @@ public sealed record MassiveBlackHoleBinaryFitSettings
     [
         "count", "f_min_hz", "f_max_hz", "include_t", "chirp_mass_min_msun", "chirp_mass_max_msun", "mass_ratio_max", "spin_max",
         "distance_min_mpc", "distance_max_mpc", "tc_min_s", "tc_max_s", "steps_per_update", "sample_interval", "temperatures",
-        "max_temperature", "phase_step_rad", "recentre_threshold", "search_chirp_mass_step",
+        "max_temperature", "phase_step_rad", "recentre_threshold", "search_chirp_mass_step", "search_updates",
     ];
 
     /// <summary>Upper edge of the default window when the record's Nyquist frequency allows it: above the ringdown of a
@@ -91,6 +91,10 @@ public sealed record MassiveBlackHoleBinaryFitSettings
     /// <summary>Step of ln 𝓜 between the search's grid points [<c>search_chirp_mass_step</c>].</summary>
     public double SearchChirpMassStep { get; init; } = 0.05;
 
+    /// <summary>Updates during which each worker searches its residual again and may restart its chains at a better seed
+    /// [<c>search_updates</c>]; 1 searches only once.</summary>
+    public int SearchUpdates { get; init; } = 3;
+
     /// <summary>The window every worker reads and writes.</summary>
     public BinWindow Window(FitDataShape shape)
     {
@@ -158,6 +162,7 @@ public sealed record MassiveBlackHoleBinaryFitSettings
             PhaseStepRad = section.GetInRange("phase_step_rad", DefaultPhaseStepRad, 1e-3, 1.0),
             RecentreThreshold = section.GetInRange("recentre_threshold", 1.0, 0, 1e6),
             SearchChirpMassStep = section.GetInRange("search_chirp_mass_step", 0.05, 1e-4, 1.0),
+            SearchUpdates = (int)section.GetInteger("search_updates", 3, 1, 1000),
         };
         section.RejectUnknownKeys(Keys);
         return settings;
@@ -186,6 +191,7 @@ public sealed record MassiveBlackHoleBinaryFitSettings
         writer.Key("phase_step_rad", PhaseStepRad);
         writer.Key("recentre_threshold", RecentreThreshold);
         writer.Key("search_chirp_mass_step", SearchChirpMassStep);
+        writer.Key("search_updates", SearchUpdates);
     }
 
     private static string Text(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);

@@ -15,9 +15,12 @@ namespace GlobalFit.Engine.SourceClasses.MassiveBlackHoleBinaries;
 /// <summary>One massive black-hole binary of the global fit: finds it in its residual, then samples its eleven parameters by
 /// parallel tempering on the heterodyned likelihood, and serves its template over the worker's window.</summary>
 /// <remarks>
-/// <para>First update: <see cref="MassiveBlackHoleBinarySearch.Run"/> seeds chirp mass, mass ratio, t_c and distance from the
-/// residual, <see cref="MassiveBlackHoleBinarySearch.RefineExtrinsic"/> sets sky, orientation, phase and distance (3000 draws);
-/// the result becomes the heterodyne reference and every chain starts there. Every update: the data summaries of the heterodyned likelihood are
+/// <para>First update: <see cref="MassiveBlackHoleBinarySearch.Run"/> seeds chirp mass, mass ratio, spins, t_c and distance from
+/// the residual, <see cref="MassiveBlackHoleBinarySearch.RefineExtrinsic"/> sets sky, orientation, phase and distance (3000
+/// draws); the result becomes the heterodyne reference and every chain starts there. Until <c>search_updates</c> updates have
+/// run, each update searches its new residual again and restarts every chain at the new seed when that beats the first cold
+/// chain on the full likelihood by more than <c>recentre_threshold</c> (a burn-in device: the first residual still holds
+/// what the other classes had not yet fitted). Every update: the data summaries of the heterodyned likelihood are
 /// rebuilt from the new residual (<see cref="MassiveBlackHoleBinaryHeterodynedLikelihood"/> around the saved reference),
 /// every chain's ln L is recomputed against them, and the sampler continues from its saved state for the update's steps.
 /// At the end, when the best cold sample of the update beats the reference by more than <c>recentre_threshold</c> in ln Λ,
@@ -113,28 +116,36 @@ public sealed class MassiveBlackHoleBinaryFitWorker : IFitWorker
         var data = ToData(residual);
         var prior = _settings.Prior();
         var state = _state;
+        bool restart = false;
         if (state.Reference is null)
         {
-            var found = MassiveBlackHoleBinarySearch.Run(_orbits, data, prior, _shape.DurationS, _settings.SearchChirpMassStep, _shape.StartS);
-            var seed = found.Statistic > double.NegativeInfinity ? found.Seed : prior.FromUnitCube([0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5]);
-            state = state with { Reference = seed.ToArray(), SearchStatistic = found.Statistic };
+            var (seed, statistic) = Seed(data, prior, state.RunSeed, state.Updates);
+            state = state with { Reference = seed.ToArray(), SearchStatistic = statistic };
+        }
+        else if (state.Sampler is { } before && state.Updates < _settings.SearchUpdates)
+        {
+            // Early updates search again: the first search saw a residual that the other classes had not yet cleaned (in
+            // the first iteration the galactic-binary windows fit this binary's chirp too), and its seed may have led the
+            // chains into a secondary mode along the mass–spin degeneracy. A new seed better on the full likelihood by more
+            // than the re-centring threshold restarts every chain there.
+            var (seed, statistic) = Seed(data, prior, state.RunSeed, state.Updates);
+            var full = new MassiveBlackHoleBinaryLikelihood(_generator, data);
+            double gain = full.LogLikelihoodRatio(seed) - full.LogLikelihoodRatio(MassiveBlackHoleBinaryParameters.FromSpan(before.Positions.AsSpan(0, 11)));
+            if (gain > _settings.RecentreThreshold)
+            {
+                state = state with { Reference = seed.ToArray(), SearchStatistic = statistic, Restarts = state.Restarts + 1 };
+                restart = true;
+            }
         }
         var reference = MassiveBlackHoleBinaryParameters.FromSpan(state.Reference);
         var likelihood = new MassiveBlackHoleBinaryHeterodynedLikelihood(_generator, data, reference, _settings.PhaseStepRad);
-        if (state.Sampler is null)
-        {
-            // The search fixed the sky and orientation; set them (and phase and distance) on the heterodyned likelihood, then
-            // move the reference there, where the chains start.
-            var random = RandomStream.ForPath(state.RunSeed, StreamBase + (ulong)_index, RefineStream);
-            reference = MassiveBlackHoleBinarySearch.RefineExtrinsic(likelihood, reference, prior, ExtrinsicDraws, ref random).Best;
-            likelihood.UpdateReference(reference);
-            state = state with { Reference = reference.ToArray() };
-        }
         var target = new MassiveBlackHoleBinaryTarget(prior, likelihood);
         var fisher = new LazyFisher(() => new ReferenceFisher(_generator, data, reference));
         var samplerSettings = SamplerSettings(_settings, state.RunSeed, StreamBase + (ulong)_index, fisher, _orbits);
         var saved = state.Sampler is { } previous ? Rescored(target, previous) : Fresh(target, samplerSettings, state.Reference);
         var sampler = ParallelTemperingSampler<MassiveBlackHoleBinaryTarget>.Resume(target, samplerSettings, saved);
+        if (restart)
+            for (int c = 0; c < sampler.ChainCount; c++) sampler.SetPosition(c, state.Reference);
         var collector = new SampleCollector(_settings.SampleInterval, sampler.Step);
         sampler.Advance(steps, collector);
 
@@ -173,6 +184,16 @@ public sealed class MassiveBlackHoleBinaryFitWorker : IFitWorker
     {
         ArgumentNullException.ThrowIfNull(handovers);
         if (handovers.Count > 0) throw new InvalidOperationException($"worker {Id} adopts no sources");
+    }
+
+    // The search's seed with sky, orientation, phase and distance set on the heterodyned likelihood around it.
+    private (MassiveBlackHoleBinaryParameters Seed, double Statistic) Seed(MassiveBlackHoleBinaryData data, MassiveBlackHoleBinaryPrior prior, ulong runSeed, long update)
+    {
+        var found = MassiveBlackHoleBinarySearch.Run(_orbits, data, prior, _shape.DurationS, _settings.SearchChirpMassStep, _shape.StartS);
+        var seed = found.Statistic > double.NegativeInfinity ? found.Seed : prior.FromUnitCube([0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5]);
+        var likelihood = new MassiveBlackHoleBinaryHeterodynedLikelihood(_generator, data, seed, _settings.PhaseStepRad);
+        var random = RandomStream.ForPath(runSeed, StreamBase + (ulong)_index, RefineStream + (ulong)update);
+        return (MassiveBlackHoleBinarySearch.RefineExtrinsic(likelihood, seed, prior, ExtrinsicDraws, ref random).Best, found.Statistic);
     }
 
     private MassiveBlackHoleBinaryData ToData(WorkerResidual residual)

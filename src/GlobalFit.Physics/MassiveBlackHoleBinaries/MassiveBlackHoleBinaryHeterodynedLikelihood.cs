@@ -52,8 +52,9 @@ public sealed class MassiveBlackHoleBinaryHeterodynedLikelihood
         _fineGenerator = generator;
         Data = data;
         _phaseStepRad = phaseStepRad;
-        // Channel T with zero weight everywhere (a fit that leaves T out) adds nothing, so its response is not computed:
-        // a third less work per likelihood.
+        // Channel T with zero weight everywhere (a fit that leaves T out) adds nothing, so its response and sums are skipped.
+        // Implementation note: the gain is small (bench, 157 bins: 23.9k against 23.6k evaluations per second), since the
+        // waveform and the link geometry shared by the channels dominate.
         _channels = data.InversePsd[2].AsSpan().ContainsAnyExcept(0.0) ? 3 : 2;
         int n = data.Window.Count;
         _reference = [new Complex[n], new Complex[n], new Complex[n]];

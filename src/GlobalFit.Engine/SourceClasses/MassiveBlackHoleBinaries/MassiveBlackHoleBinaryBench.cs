@@ -48,7 +48,7 @@ internal static class MassiveBlackHoleBinaryBench
         yield return new BenchFigure("massive_black_hole_binary_heterodyned_likelihoods_per_s", evaluations / likelihoodSeconds,
             $"heterodyned log-likelihood ratio per second, one core ({heterodyned.BinCount} coarse bins over the same {window.Count} bins)");
 
-        // The fit's default leaves T out (weight zero), which skips its response.
+        // The fit's default leaves T out (weight zero), which skips its response and sums.
         var aeOnly = new MassiveBlackHoleBinaryData(window, dfHz, [a, e, t], [inverse[0], inverse[1], new double[window.Count]]);
         var heterodynedAe = new MassiveBlackHoleBinaryHeterodynedLikelihood(generator, aeOnly, source);
         double aeSeconds = QuickTimer.BestSeconds(() =>

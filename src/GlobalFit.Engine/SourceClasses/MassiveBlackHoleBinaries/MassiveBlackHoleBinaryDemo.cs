@@ -52,6 +52,8 @@ internal sealed class MassiveBlackHoleBinaryDemo : IDemoPart
         # The chains are cheap next to the search and the window templates: 1500 steps cost about 0.4 s per iteration.
         steps_per_update = 1500
         temperatures = 6
+        # Half the default grid: the ascent after the grid finds the chirp mass anyway, and each search costs half as much.
+        search_chirp_mass_step = 0.1
         """;
 
     public void Report(TextWriter output, IFitSourceClassPlan plan, double dfHz, IReadOnlyList<CatalogueRecord> sources, TruthTable? truth)

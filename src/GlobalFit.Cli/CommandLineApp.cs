@@ -23,6 +23,7 @@ public static class CommandLineApp
             ResumeCommand.Create(context),
             StatusCommand.Create(context),
             CatalogueCommand.Create(context),
+            CompareCommand.Create(context),
             TraceCommand.Create(context),
             DemoCommand.Create(context),
             BenchCommand.Create(context),

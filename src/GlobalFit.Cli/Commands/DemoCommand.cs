@@ -64,18 +64,13 @@ public static class DemoCommand
         if (Directory.Exists(runFolder)) Directory.Delete(runFolder, recursive: true);
         context.Out.WriteLine();
         context.Out.WriteLine($"demo: fitting every class and the noise jointly ({configPath})");
-        var catalogue = System.Collections.Immutable.ImmutableArray<CatalogueRecord>.Empty;
-        status = FitCommand.Run(context, options => FitRunner.Start(configPath, options), otlp: null, completed: outcome => catalogue = outcome.Catalogue);
+        status = FitCommand.Run(context, options => FitRunner.Start(configPath, options), otlp: null, completed: null);
         if (status != ExitCodes.Success) return status;
 
         context.Out.WriteLine();
-        var plan = RunPlan.Load(new RunFolderLayout(runFolder).ResolvedConfig);
-        var observation = ObservationFile.Read(dataPath);
-        foreach (var classPlan in plan.Classes)
-        {
-            if (SourceClassRegistry.Default.Find(classPlan.ClassId)?.Demo is not { } part) continue;
-            part.Report(context.Out, classPlan, plan.Shape.DfHz, [.. catalogue.Where(r => r.ClassId == classPlan.ClassId)], observation.FindTruth(classPlan.ClassId));
-        }
+        context.Out.WriteLine($"demo: the catalogue against the truth (globalfit compare {runFolder} --truth {dataPath})");
+        status = CompareCommand.Run(context, runFolder, dataPath, CompareCommand.DefaultDetectableSnr, json: false);
+        if (status != ExitCodes.Success) return status;
         context.Out.WriteLine();
         context.Out.WriteLine($"demo: the run is in {runFolder}; try 'globalfit status {runFolder}', 'globalfit trace {runFolder}', 'globalfit catalogue {runFolder} --format json'");
         return ExitCodes.Success;

@@ -5,7 +5,7 @@ using MessagePack;
 
 namespace GlobalFit.Engine.Checkpoints;
 
-/// <summary>Writes and reads <c>RUN/checkpoint/</c>: <c>latest.ckpt</c> and the one before it, <c>previous.ckpt</c>.</summary>
+/// <summary>Writes and reads <c>RUN/checkpoints/</c>: <c>latest.ckpt</c> and the one before it, <c>previous.ckpt</c>.</summary>
 /// <remarks>
 /// <para>File layout: 8 bytes magic <c>GFCKPT01</c>, 8 bytes little-endian payload length, 32 bytes SHA-256 of the
 /// payload, then the MessagePack <see cref="RunCheckpoint"/>. A write goes to <c>latest.tmp</c>, is flushed to disk
@@ -19,8 +19,11 @@ public static class CheckpointFile
     private const int HeaderBytes = 8 + 8 + 32;
     private static readonly byte[] Magic = "GFCKPT01"u8.ToArray();
 
+    /// <summary>Name of the checkpoint folder inside a run folder.</summary>
+    public const string FolderName = "checkpoints";
+
     /// <summary>The folder inside a run folder.</summary>
-    public static string Folder(string runFolder) => Path.Combine(runFolder, "checkpoint");
+    public static string Folder(string runFolder) => Path.Combine(runFolder, FolderName);
 
     /// <summary>Path of the newest checkpoint.</summary>
     public static string LatestPath(string runFolder) => Path.Combine(Folder(runFolder), "latest.ckpt");

@@ -26,7 +26,7 @@ public sealed record RunFolderLayout(string Root)
     {
         foreach (string file in new[] { ResolvedConfig, StatusFile, TelemetryFile })
             if (File.Exists(file)) File.Delete(file);
-        foreach (string folder in new[] { Path.Combine(Root, Samples.SampleStore.ChainsFolderName), Checkpoints.CheckpointFile.Folder(Root) })
+        foreach (string folder in new[] { Path.Combine(Root, Samples.SampleStore.SamplesFolderName), Checkpoints.CheckpointFile.Folder(Root) })
             if (Directory.Exists(folder)) Directory.Delete(folder, recursive: true);
     }
 

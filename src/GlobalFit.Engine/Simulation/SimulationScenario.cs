@@ -1,6 +1,7 @@
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Physics.Constants;
 using GlobalFit.Physics.Noise;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Simulation;
 
@@ -81,9 +82,9 @@ public sealed record ObservationSettings(double DurationS, double CadenceS, doub
         if (!double.IsFinite(start)) throw table.Invalid("start_s", "must be finite");
         double samples = Math.Floor(duration / cadence);
         if (samples < 16)
-            throw table.Invalid("cadence_s", $"duration {duration} s at cadence {cadence} s gives {samples} samples; at least 16 are needed");
+            throw table.Invalid("cadence_s", $"duration {duration} s at cadence {cadence} s gives {samples} points per channel; at least 16 are needed");
         if (samples > int.MaxValue / 4)
-            throw table.Invalid("duration_s", $"duration {duration} s at cadence {cadence} s gives {samples:E3} samples per channel, more than this build handles ({int.MaxValue / 4})");
+            throw table.Invalid("duration_s", $"duration {duration} s at cadence {cadence} s gives {NumberText.Significant(samples, 4)} points per channel, more than this build handles ({int.MaxValue / 4})");
         if (duration > 20 * PhysicalConstants.JulianYearS)
             throw table.Invalid(table.Has("duration_days") ? "duration_days" : "duration_s", "durations beyond 20 years are outside the orbit model's intended range");
         table.RejectUnknownKeys(["duration_s", "duration_days", "cadence_s", "start_s"]);

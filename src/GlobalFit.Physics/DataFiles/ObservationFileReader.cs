@@ -85,6 +85,11 @@ internal sealed class ObservationFileReader : IDisposable
             throw _input.Error(H5Input.AttributePath(Root, L.FormatVersionAttribute),
                 "missing: this HDF5 file is not a globalfit observation file (layout in src/GlobalFit.Physics/DataFiles/LAYOUT.md)");
         long version = _input.ReadInteger(_file, Root, L.FormatVersionAttribute);
+        if (version == 1)
+            throw _input.Error(H5Input.AttributePath(Root, L.FormatVersionAttribute),
+                $"format version 1 was written by an earlier globalfit whose truth columns and class ids have since been renamed "
+                + $"(amp is now amplitude); simulate the data again, or set format_version = {ObservationFile.CurrentFormatVersion} "
+                + "after renaming the truth columns as in src/GlobalFit.Physics/DataFiles/LAYOUT.md");
         if (version != ObservationFile.CurrentFormatVersion)
             throw _input.Error(H5Input.AttributePath(Root, L.FormatVersionAttribute),
                 $"format version {version} is not supported; this build reads version {ObservationFile.CurrentFormatVersion}");

@@ -104,9 +104,9 @@ public class BadInputTests
     public void An_unsupported_foreground_duration_is_rejected_naming_the_option()
     {
         using var folder = new TempFolder();
-        var result = CliRun.Run("sensitivity", "--years", "3", "--out", folder.File("c.csv"));
+        var result = CliRun.Run("sensitivity", "--foreground-fit-years", "3", "--out", folder.File("c.csv"));
         Assert.Equal(2, result.ExitCode);
-        Assert.Contains("--years", result.Error);
+        Assert.Contains("--foreground-fit-years", result.Error);
         Assert.Contains("0.5, 1, 2 and 4", result.Error);
         Assert.False(File.Exists(folder.File("c.csv")));
     }

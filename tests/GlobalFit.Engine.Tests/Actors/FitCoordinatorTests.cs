@@ -55,7 +55,7 @@ public sealed class FitCoordinatorTests : Akka.TestKit.Xunit2.TestKit
         Assert.Equal([1L, 2, 3, 4, 5], appended.Select(a => a.Iteration));
         Assert.All(appended, a => Assert.Equal(["noise", "stub/0", "stub/1", "stub/2"], a.Blocks.Select(b => b.WorkerId)));
         Assert.All(appended, a => Assert.All(a.Blocks, b => Assert.Equal(a.Iteration, b.Iteration)));
-        // checkpoint_every = 2 and the final iteration.
+        // checkpoint_every_iterations = 2 and the final iteration.
         Assert.Equal([2L, 4, 5], harness.Checkpoints.Select(c => c.Checkpoint.Iteration));
         Assert.Equal(5, harness.Progress.Reports.Count);
     }

@@ -46,6 +46,8 @@ internal sealed class MassiveBlackHoleBinaryFitPlan : IFitSourceClassPlan
     public IClassCatalogue CreateCatalogue(IPsdSource noise, long burnInIterations, double minimumConfidence) =>
         new MassiveBlackHoleBinaryClassCatalogue(_orbits, _shape, Settings.Window(_shape), noise, burnInIterations);
 
+    public ISourceMatcher CreateMatcher(IPsdSource noise) => new MassiveBlackHoleBinaryMatcher(_orbits, _shape, Settings, noise);
+
     public void WriteResolved(ResolvedConfigWriter writer) => Settings.WriteResolved(writer);
 
     internal static string WorkerIdOf(int number) => Prefix + Number(number);

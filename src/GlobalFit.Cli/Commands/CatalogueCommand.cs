@@ -35,20 +35,25 @@ public static class CatalogueCommand
             if (r.GetValueOrDefault<double?>() is { } v && !(v >= 0 && double.IsFinite(v))) r.AddError("--min-snr must be finite and at least 0");
         });
         var noSamples = new Option<bool>("--no-samples") { Description = "JSON without the posterior samples (summaries and sample counts only)" };
-        var command = new Command("catalogue", "Export the catalogue of a run from its stored samples") { run, format, output, force, burnIn, minConfidence, minSnr, noSamples };
+        var acceptNewData = ResumeCommand.AcceptNewDataOption();
+        var command = new Command("catalogue", "Export the catalogue of a run from its stored samples") { run, format, output, force, burnIn, minConfidence, minSnr, noSamples, acceptNewData };
         command.SetAction(parse => Run(context, parse.GetValue(run)!, parse.GetValue(format)!, parse.GetValue(output), parse.GetValue(force),
-            parse.GetValue(burnIn), parse.GetValue(minConfidence), parse.GetValue(minSnr), parse.GetValue(noSamples)));
+            parse.GetValue(burnIn), parse.GetValue(minConfidence), parse.GetValue(minSnr), parse.GetValue(noSamples), parse.GetValue(acceptNewData)));
         return command;
     }
 
-    private static int Run(CliContext context, string runFolder, string format, string? output, bool force, long? burnIn, double? minConfidence, double? minSnr, bool noSamples)
+    private static int Run(CliContext context, string runFolder, string format, string? output, bool force, long? burnIn, double? minConfidence, double? minSnr, bool noSamples, bool acceptNewData)
     {
         var layout = RunFolderLayout.OpenExisting(runFolder);
         if (format == "h5" && output is null) throw new InvalidInputException("--out", null, "the h5 format needs a file: --out FILE.h5");
         if (noSamples && format != "json") throw new InvalidInputException("--no-samples", null, "applies to --format json only (CSV holds no samples; HDF5 keeps them by its layout)");
         string? target = output is null ? null : Console.OutputPaths.CheckWritable(output, force, "--out");
         var plan = RunPlan.Load(layout.ResolvedConfig);
-        var records = RunCatalogue.Build(plan, layout, message => context.Error.WriteLine($"warning: {message}"), burnIn, minConfidence);
+        Action<string> warn = message => context.Error.WriteLine($"warning: {message}");
+        // The catalogue is built from stored samples alone, but it describes the data file the run names: a different
+        // file there would pair the samples with data they were not drawn from.
+        DataIdentity.Verify(layout, plan.Settings.DataPath, acceptNewData, warn);
+        var records = RunCatalogue.Build(plan, layout, warn, burnIn, minConfidence);
         // A row without an SNR (the noise posterior) is not a source an SNR floor applies to.
         if (minSnr is { } floor) records = [.. records.Where(r => double.IsNaN(r.Snr) || r.Snr >= floor)];
         switch (format)

@@ -17,8 +17,14 @@ public static class ResumeCommand
         {
             if (r.GetValueOrDefault<long?>() is < 1) r.AddError("--iterations must be at least 1");
         });
-        var command = new Command("resume", "Continue a stopped fit exactly where its last checkpoint left it, or extend a finished one") { run, otlp, iterations };
-        command.SetAction(parse => FitCommand.Run(context, options => FitRunner.Resume(parse.GetValue(run)!, options, parse.GetValue(iterations)), parse.GetValue(otlp)));
+        var acceptNewData = AcceptNewDataOption();
+        var command = new Command("resume", "Continue a stopped fit exactly where its last checkpoint left it, or extend a finished one") { run, otlp, iterations, acceptNewData };
+        command.SetAction(parse => FitCommand.Run(context,
+            options => FitRunner.Resume(parse.GetValue(run)!, options with { AcceptNewData = parse.GetValue(acceptNewData) }, parse.GetValue(iterations)), parse.GetValue(otlp)));
         return command;
     }
+
+    /// <summary><c>--accept-new-data</c>, shared with <c>catalogue</c>.</summary>
+    internal static Option<bool> AcceptNewDataOption() =>
+        new("--accept-new-data") { Description = "Go on although the data file is not the one the run was fitted to (its size or SHA-256 changed)" };
 }

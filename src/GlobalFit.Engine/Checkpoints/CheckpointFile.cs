@@ -41,11 +41,14 @@ public static class CheckpointFile
         {
             WriteTemporary(temporary, checkpoint);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e)
         {
-            // The previous checkpoints stay as they were; a half-written temporary file is not left behind.
+            // The previous checkpoints stay as they were; a half-written temporary file is not left behind. The
+            // serialiser wraps the stream's I/O errors in its own exception; the I/O cause is what the user needs.
             TryDelete(temporary);
-            throw new IOException($"{temporary} cannot be written: {FileProblem.Describe(temporary, e)}", e);
+            if (FileWriteException.IoCause(e) is { } cause)
+                throw new IOException($"{temporary} cannot be written: {FileProblem.Describe(temporary, cause)}", e);
+            throw;
         }
         string latest = LatestPath(runFolder);
         if (File.Exists(latest)) File.Move(latest, PreviousPath(runFolder), overwrite: true);
@@ -66,7 +69,7 @@ public static class CheckpointFile
 
     private static void WriteTemporary(string temporary, RunCheckpoint checkpoint)
     {
-        using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
+        using (var stream = WriteStreams.Open(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
         {
             // The payload is serialised straight to the file behind a placeholder header, which is filled in once its
             // length and digest are known: a checkpoint of thousands of workers is never held whole in memory.
@@ -85,7 +88,7 @@ public static class CheckpointFile
             digest.CopyTo(header[16..]);
             stream.Position = 0;
             stream.Write(header);
-            stream.Flush(flushToDisk: true);
+            WriteStreams.FlushToDisk(stream);
         }
     }
 

@@ -32,12 +32,14 @@ public static partial class FitRunner
         // Everything that can be wrong with the data is found before the run folder is touched, so a refused fit leaves
         // nothing behind that would block a retry.
         var data = LoadData(plan, options.Progress);
+        var identity = DataIdentity.Of(plan.Settings.DataPath);
         bool unstarted = layout.HoldsUnstartedRun();
         Directory.CreateDirectory(layout.Root);
         using var runLock = RunLock.Acquire(layout);
         if (unstarted) layout.ClearUnstartedRun();
         string resolved = plan.ResolvedToml();
         AtomicFile.Write(layout.ResolvedConfig, overwrite: false, s => s.Write(Encoding.UTF8.GetBytes(resolved)));
+        identity.Write(layout);
         return Run(plan, layout, Digest(resolved), data, FitPosition.Fresh(plan.Workers), options);
     }
 
@@ -66,6 +68,8 @@ public static partial class FitRunner
         var layout = RunFolderLayout.OpenExisting(runFolder);
         using var runLock = RunLock.Acquire(layout);
         string resolved = File.ReadAllText(layout.ResolvedConfig);
+        // Checked before anything in the folder changes (run.toml included): a refused resume leaves the run as it was.
+        var identity = DataIdentity.Verify(layout, RunPlan.Load(layout.ResolvedConfig, options.Registry).Settings.DataPath, options.AcceptNewData, options.Progress.Warning);
         if (iterations is { } total)
         {
             long done = CheckpointFile.Exists(layout.Root) ? CheckpointFile.Read(layout.Root, options.Progress.Warning).Iteration : 0;
@@ -95,8 +99,9 @@ public static partial class FitRunner
         {
             start = FitPosition.Fresh(plan.Workers);
         }
-        store.TruncateAfter(start.Iteration);
         var data = LoadData(plan, options.Progress);
+        store.TruncateAfter(start.Iteration);
+        identity.Write(layout);
         return Run(plan, layout, digest, data, start, options);
     }
 
@@ -121,12 +126,18 @@ public static partial class FitRunner
         var store = system.ActorOf(SampleStoreActor.Props(new SampleStore(layout.Root)), "sample-store");
         var checkpointer = system.ActorOf(CheckpointerActor.Props(layout.Root), "checkpointer");
         var setup = new CoordinatorSetup(plan.StagePlan(digest), start, plan.Workers.ToDictionary(w => w.Id, w => w.Label, StringComparer.Ordinal),
-            settings.Threads, residual, store, checkpointer, progress, LoadOnce);
+            settings.Threads, residual, store, checkpointer, progress, LoadOnce)
+        {
+            RecordFailure = new WorkerFailureLog(layout.WorkerFailureLog).Record,
+        };
         var coordinator = system.ActorOf(FitCoordinator.Props(setup), "fit-coordinator");
         using var stop = options.Cancellation.Register(() => coordinator.Tell(new StopFit()));
         var finished = coordinator.Ask<FitFinished>(new StartFit(), Timeout.InfiniteTimeSpan).GetAwaiter().GetResult();
         system.Terminate().Wait(TimeSpan.FromSeconds(10));
         var outcome = finished.Outcome;
+        telemetry.Flush();
+        if (telemetry.WriteFailure is { } lost)
+            options.Progress.Warning($"telemetry could not be written ({lost}); the fit's samples and checkpoints are complete, but 'trace' lacks the spans from then on");
         progress.WriteState(outcome.Kind.StateName(), outcome.IterationsCompleted, settings.Iterations, outcome.Message, outcome.CheckpointIteration);
         return outcome.Kind == FitOutcomeKind.Completed
             ? outcome with { Catalogue = RunCatalogue.Export(plan, layout, options.Progress.Warning) }

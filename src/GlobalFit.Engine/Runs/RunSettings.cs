@@ -51,14 +51,13 @@ public sealed record RunSettings
     public static RunSettings FromConfig(ConfigTable root, string configFolder, bool requireData = true)
     {
         ArgumentNullException.ThrowIfNull(root);
-        string data = root.GetString("data", "");
-        if (data.Length == 0) throw root.Invalid("data", "the run configuration must name its observation file: data = \"FILE.h5\"");
+        if (!root.Has("data")) throw root.Invalid("data", "the run configuration must name its observation file: data = \"FILE.h5\"");
         int iterations = (int)root.GetInteger("iterations", 100, 1, 100_000_000);
         var defaults = new RunSettings { DataPath = "", RunFolder = "" };
         var settings = new RunSettings
         {
-            DataPath = Path.GetFullPath(data, configFolder),
-            RunFolder = Path.GetFullPath(root.GetString("run_folder", "run"), configFolder),
+            DataPath = root.GetPath("data", "", configFolder),
+            RunFolder = root.GetPath("run_folder", "run", configFolder),
             Seed = (ulong)root.GetInteger("seed", 1, 0, long.MaxValue),
             Iterations = iterations,
             BurnIn = (int)root.GetInteger("burn_in", iterations / 5, 0, iterations - 1),

@@ -30,7 +30,7 @@ internal sealed record CommitManifest(long Iteration, IReadOnlyDictionary<string
                 throw new InvalidInputException(path, null, "is missing, but sample files beside it hold data: which samples were committed cannot be told, so none are read");
             return Empty;
         }
-        string[] lines = File.ReadAllLines(path, Encoding.UTF8);
+        string[] lines = TextFile.ReadUtf8(path).Split('\n').Select(l => l.TrimEnd('\r')).ToArray();
         if (lines.Length < 2 || lines[0] != FirstLine)
             throw new InvalidInputException(path, "line 1", $"is not a chain commit file (expected the first line '{FirstLine}')");
         var iterationField = lines[1].Split(' ');

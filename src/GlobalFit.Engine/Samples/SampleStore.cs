@@ -233,14 +233,14 @@ public sealed class SampleStore
     {
         try
         {
-            using var stream = new FileStream(path, FileMode.OpenOrCreate, FileAccess.Write, FileShare.Read);
+            using var stream = WriteStreams.Open(path, FileMode.OpenOrCreate, FileAccess.Write, FileShare.Read);
             if (stream.Length < committedLength)
                 throw new InvalidInputException(path, null, $"holds {stream.Length} bytes but {committedLength} were committed: the file was cut short");
             // Bytes past the commit point are the remains of an append a crash interrupted: never committed, so dropped.
             if (stream.Length > committedLength) stream.SetLength(committedLength);
             stream.Seek(committedLength, SeekOrigin.Begin);
             stream.Write(record);
-            stream.Flush(flushToDisk: true);
+            WriteStreams.FlushToDisk(stream);
             return committedLength + record.Length;
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
@@ -251,9 +251,9 @@ public sealed class SampleStore
 
     private static void CutFile(string path, long length)
     {
-        using var stream = new FileStream(path, FileMode.Open, FileAccess.Write, FileShare.Read);
+        using var stream = WriteStreams.Open(path, FileMode.Open, FileAccess.Write, FileShare.Read);
         stream.SetLength(length);
-        stream.Flush(flushToDisk: true);
+        WriteStreams.FlushToDisk(stream);
     }
 
     private sealed class IterationThenWorker : IComparer<(long Iteration, string WorkerId)>

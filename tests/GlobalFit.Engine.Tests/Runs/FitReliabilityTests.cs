@@ -163,17 +163,6 @@ public sealed class FitReliabilityTests(SharedFitData data) : IClassFixture<Shar
         return config;
     }
 
-    // Requests a stop once an iteration is reported.
-    private sealed class StopAt(long iteration, CancellationTokenSource stop) : IFitProgress
-    {
-        public void IterationCompleted(IterationReport report)
-        {
-            if (report.Iteration == iteration) stop.Cancel();
-        }
-
-        public void Warning(string message) { }
-    }
-
     // Puts an obstacle in place when an iteration is reported, before the checkpoint of that iteration is written.
     private sealed class Obstructing(long atIteration, Action obstruct) : IFitProgress
     {

@@ -53,6 +53,11 @@ public class SimulationScenarioTests
     [InlineData("sede = 3\n[observation]\nduration_days = 3\n", "key 'sede'", "did you mean 'seed'?")]
     [InlineData("seed = -3\n[observation]\nduration_days = 3\n", "key 'seed'", "integer in [0,")]
     [InlineData("name = \"x\"\n", null, "[observation] table is required")]
+    [InlineData("[observation]\nduration_days = 7000\ncadence_s = 0.1\n", "key 'observation.duration_days'", "more than this build handles")]
+    [InlineData("[observation]\nduration_days = 8000\n", "key 'observation.duration_days'", "beyond 20 years")]
+    // 4.99e8 samples need about 93 GiB at the measured 200 bytes per sample: more than any test machine here has
+    // (this one has 24 GiB; CI machines are of the same class).
+    [InlineData("[observation]\nduration_s = 4.99e8\ncadence_s = 1\n", "key 'observation.duration_s'", "GiB to simulate")]
     public void Invalid_scenarios_are_rejected_naming_the_key(string text, string? where, string problem)
     {
         var e = Assert.Throws<InvalidInputException>(() => Parse(text));

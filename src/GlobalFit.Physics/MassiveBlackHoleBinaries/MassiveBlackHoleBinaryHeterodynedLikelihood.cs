@@ -23,6 +23,7 @@ public sealed class MassiveBlackHoleBinaryHeterodynedLikelihood
     private readonly MassiveBlackHoleBinaryTemplateGenerator _fineGenerator;
     private readonly Complex[][] _reference;
     private readonly double _phaseStepRad;
+    private readonly int _channels;
     private int[] _edgeIndex = [];
     private double[] _edgeHz = [];
     private MassiveBlackHoleBinaryTemplateGenerator _edgeGenerator = null!;
@@ -51,6 +52,10 @@ public sealed class MassiveBlackHoleBinaryHeterodynedLikelihood
         _fineGenerator = generator;
         Data = data;
         _phaseStepRad = phaseStepRad;
+        // Channel T with zero weight everywhere (a fit that leaves T out) adds nothing, so its response and sums are skipped.
+        // Implementation note: the gain is small (bench, 157 bins: 23.9k against 23.6k evaluations per second), since the
+        // waveform and the link geometry shared by the channels dominate.
+        _channels = data.InversePsd[2].AsSpan().ContainsAnyExcept(0.0) ? 3 : 2;
         int n = data.Window.Count;
         _reference = [new Complex[n], new Complex[n], new Complex[n]];
         UpdateReference(reference);
@@ -140,10 +145,10 @@ public sealed class MassiveBlackHoleBinaryHeterodynedLikelihood
     /// <exception cref="ArgumentOutOfRangeException">A parameter is outside the waveform's range.</exception>
     public double LogLikelihoodRatio(in MassiveBlackHoleBinaryParameters source)
     {
-        _edgeGenerator.Render(source, _edgeHz, _edgeTemplate[0], _edgeTemplate[1], _edgeTemplate[2]);
+        _edgeGenerator.Render(source, _edgeHz, _edgeTemplate[0], _edgeTemplate[1], _channels == 3 ? _edgeTemplate[2] : Span<Complex>.Empty);
         double overlap = 0, norm = 0;
         int bins = BinCount;
-        for (int c = 0; c < 3; c++)
+        for (int c = 0; c < _channels; c++)
         {
             var h = _edgeTemplate[c];
             var inverse = _inverseReferenceAtEdges[c];

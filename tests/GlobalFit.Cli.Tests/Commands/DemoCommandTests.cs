@@ -15,6 +15,7 @@ public class DemoCommandTests
         Assert.Contains("mean estimate/model", first.Out);
         Assert.Matches(@"galactic_binaries: \d+ injected with SNR >= 7; found \d+, missed \d+; \d+ catalogued, \d+ spurious", first.Out);
         Assert.Contains("matching: same source when the noise-weighted overlap", first.Out);
+        Assert.Matches(@"massive_black_hole_binaries: 1 injected with SNR >= 7; found \d, missed \d; \d catalogued, \d spurious", first.Out);
         foreach (string file in new[] { "data.h5", "noise.png", "fit.toml", "run/run.toml", "run/catalogue.csv", "run/catalogue.h5", "run/telemetry.jsonl" })
             Assert.True(File.Exists(Path.Combine(demo, file)), file);
         Assert.Equal(0, CliRun.Run("demo", "--out", demo, "--iterations", "2").ExitCode);

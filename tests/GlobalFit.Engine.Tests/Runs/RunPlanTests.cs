@@ -56,11 +56,23 @@ public sealed class RunPlanTests(SharedFitData data) : IClassFixture<SharedFitDa
     }
 
     [Fact]
-    public void A_massive_black_hole_binary_section_is_refused_because_fitting_the_class_is_not_built_yet()
+    public void A_massive_black_hole_binary_section_plans_one_stage_per_binary_between_galactic_binaries_and_noise()
     {
-        var error = Refused("", extra: "[massive_black_hole_binaries]\n");
-        Assert.Contains("massive_black_hole_binaries", error.Message, StringComparison.Ordinal);
-        Assert.Contains("not built yet", error.Message, StringComparison.Ordinal);
+        var plan = Plan("", extra: "[massive_black_hole_binaries]\ncount = 2\nf_max_hz = 0.02\n");
+        Assert.Equal(
+            ["galactic_binaries.even", "galactic_binaries.odd", "massive_black_hole_binaries.01", "massive_black_hole_binaries.02", "noise"],
+            plan.Schedule.Stages.Select(s => Assert.Single(s)));
+        var resolved = ConfigDocument.Parse(plan.ResolvedToml(), "run.toml").GetTable("massive_black_hole_binaries")!;
+        foreach (string key in GlobalFit.Engine.SourceClasses.MassiveBlackHoleBinaries.MassiveBlackHoleBinaryFitSettings.Keys)
+            Assert.True(resolved.Has(key), "massive_black_hole_binaries." + key);
+    }
+
+    [Fact]
+    public void A_massive_black_hole_binary_window_above_the_nyquist_frequency_is_refused_naming_the_key()
+    {
+        var error = Refused("", extra: "[massive_black_hole_binaries]\nf_max_hz = 10.0\n");
+        Assert.Contains("massive_black_hole_binaries.f_max_hz", error.Message, StringComparison.Ordinal);
+        Assert.Contains("Nyquist", error.Message, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -7,8 +7,9 @@ using GlobalFit.Physics.MassiveBlackHoleBinaries;
 
 namespace GlobalFit.Engine.SourceClasses.MassiveBlackHoleBinaries;
 
-/// <summary>The massive black-hole binary module. Scenarios inject populations and listed binaries; the fit side is not
-/// built yet, so a run configuration that asks for the class is refused.</summary>
+/// <summary>The massive black-hole binary module: one worker per binary over a broadband window, each found by a matched-filter
+/// search of its residual and sampled by parallel tempering on the heterodyned likelihood; scenarios inject populations and
+/// listed binaries; catalogue rows per binary.</summary>
 public sealed class MassiveBlackHoleBinaryClass : ISourceClass
 {
     /// <summary>The class id: config and scenario section, truth table, worker-id prefix.</summary>
@@ -32,14 +33,20 @@ public sealed class MassiveBlackHoleBinaryClass : ISourceClass
     /// <inheritdoc />
     ISimulatedSourceClass? ISourceClass.Simulation => Simulation;
 
-    /// <summary>None: the demo fit cannot fit this class yet.</summary>
-    public IDemoPart? Demo => null;
+    /// <summary>One invented binary merging inside the demo's month, fitted by the demo.</summary>
+    public IDemoPart Demo { get; } = new MassiveBlackHoleBinaryDemo();
 
-    /// <summary>Always refuses: fitting massive black-hole binaries is not built yet.</summary>
-    /// <exception cref="Physics.Files.InvalidInputException">Always; the message names the section.</exception>
+    /// <inheritdoc />
+    IDemoPart? ISourceClass.Demo => Demo;
+
+    /// <summary>Reads the <c>[massive_black_hole_binaries]</c> section (<see cref="MassiveBlackHoleBinaryFitSettings"/>) and plans
+    /// one worker per binary.</summary>
+    /// <exception cref="Physics.Files.InvalidInputException">A key is unknown, malformed or cannot work with the data; the
+    /// message names it.</exception>
     public IFitSourceClassPlan PlanFit(ConfigTable section, FitDataShape shape)
     {
         ArgumentNullException.ThrowIfNull(section);
-        throw section.InvalidTable($"fitting source class '{Id}' is not built yet (only simulating it is); remove the [{Id}] section from the run configuration");
+        ArgumentNullException.ThrowIfNull(shape);
+        return new MassiveBlackHoleBinaryFitPlan(MassiveBlackHoleBinaryFitSettings.FromConfig(section, shape), shape);
     }
 }

@@ -8,12 +8,12 @@ namespace GlobalFit.Engine.Tests.SourceClasses.MassiveBlackHoleBinaries;
 public class MassiveBlackHoleBinaryClassTests(ITestOutputHelper output)
 {
     [Fact]
-    public void The_class_is_registered_after_galactic_binaries_with_its_columns_and_simulation()
+    public void The_class_is_registered_after_galactic_binaries_with_its_columns_simulation_and_demo_part()
     {
         Assert.Equal(["galactic_binaries", MassiveBlackHoleBinaryClass.Id, "extreme_mass_ratio_inspirals", "noise"], SourceClassRegistry.Default.Ids);
         var module = SourceClassRegistry.Default.Find(MassiveBlackHoleBinaryClass.Id)!;
         Assert.Equal(MassiveBlackHoleBinaryParameters.ColumnNames, module.ParameterColumns);
-        Assert.Null(module.Demo);
+        Assert.NotNull(module.Demo);
         Assert.NotNull(module.Simulation);
     }
 
@@ -22,7 +22,8 @@ public class MassiveBlackHoleBinaryClassTests(ITestOutputHelper output)
     public void The_bench_suite_reports_template_and_heterodyned_likelihood_rates()
     {
         var figures = Assert.Single(new MassiveBlackHoleBinaryClass().BenchSuites).Run().ToList();
-        Assert.Equal(["massive_black_hole_binary_templates_per_s", "massive_black_hole_binary_heterodyned_likelihoods_per_s"], figures.Select(f => f.Name));
+        Assert.Equal(["massive_black_hole_binary_templates_per_s", "massive_black_hole_binary_heterodyned_likelihoods_per_s",
+            "massive_black_hole_binary_heterodyned_ae_likelihoods_per_s"], figures.Select(f => f.Name));
         foreach (var f in figures)
         {
             output.WriteLine($"{f.Name} = {f.Value:G4}  ({f.Description})");

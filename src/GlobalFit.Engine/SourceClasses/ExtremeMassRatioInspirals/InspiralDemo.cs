@@ -1,0 +1,86 @@
+using System.Globalization;
+using GlobalFit.Engine.Fitting;
+using GlobalFit.Physics.DataFiles;
+using P = GlobalFit.Physics.ExtremeMassRatioInspirals.ExtremeMassRatioInspiralParameters;
+
+namespace GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
+
+/// <summary>The inspiral of the built-in demo: one invented source, fitted from a start row a few posterior widths
+/// off its truth (as a catalogue row of an earlier, shorter analysis would be), and the comparison of its catalogue row
+/// with the truth.</summary>
+internal sealed class InspiralDemo : IDemoPart
+{
+    public string ScenarioToml => """
+        [[extreme_mass_ratio_inspirals.inspiral]]
+        id = "demo-emri"
+        central_mass_msun = 5e5
+        compact_mass_msun = 10
+        central_spin = 0.6
+        orbital_frequency0_hz = 1.2e-3
+        eccentricity0 = 0.15
+        orbit_inclination_rad = 0.8
+        beta_rad = 0.4
+        lambda_rad = 2.0
+        spin_theta_rad = 1.2
+        spin_phi_rad = 0.7
+        distance_mpc = 1000
+        phi0_rad = 1.0
+        gamma0_rad = 0.5
+        alpha0_rad = 2.5
+        """;
+
+    public string FitToml => """
+        [extreme_mass_ratio_inspirals]
+        steps_per_update = 60
+        temperatures = 3
+        search_evaluations = 150
+
+        [[extreme_mass_ratio_inspirals.start]]
+        id = "demo-emri"
+        central_mass_msun = 5e5
+        compact_mass_msun = 10
+        central_spin = 0.6
+        orbital_frequency0_hz = 1.2e-3
+        eccentricity0 = 0.15
+        orbit_inclination_rad = 0.8
+        beta_rad = 0.4
+        lambda_rad = 2.0
+        spin_theta_rad = 1.2
+        spin_phi_rad = 0.7
+        distance_mpc = 1000
+        phi0_rad = 1.0
+        gamma0_rad = 0.5
+        alpha0_rad = 2.5
+        """;
+
+    public void Report(TextWriter output, IFitSourceClassPlan plan, double dfHz, IReadOnlyList<CatalogueRecord> sources, TruthTable? truth)
+    {
+        ArgumentNullException.ThrowIfNull(output);
+        ArgumentNullException.ThrowIfNull(sources);
+        if (truth is null)
+        {
+            output.WriteLine($"demo: inspirals: {sources.Count} catalogued; the data hold no truth table to compare with");
+            return;
+        }
+        foreach (var row in sources)
+        {
+            int t = truth.Ids.ToList().IndexOf("demo-emri");
+            if (t < 0) continue;
+            int inside = 0;
+            var text = new System.Text.StringBuilder();
+            for (int c = 0; c < row.ParameterNames.Length; c++)
+            {
+                string name = row.ParameterNames[c];
+                double value = truth[t, name];
+                bool periodic = InspiralSamplingCoordinates.IsPeriodic(c);
+                double shifted = periodic ? row.Median[c] + Math.IEEERemainder(value - row.Median[c], 2 * Math.PI) : value;
+                if (shifted >= row.Lower[c] && shifted <= row.Upper[c]) inside++;
+                double sigma = (row.Upper[c] - row.Lower[c]) / (2 * 1.6448536269514722);
+                text.Append(CultureInfo.InvariantCulture, $" {name} {(sigma > 0 ? (row.Median[c] - shifted) / sigma : 0):+0.0;-0.0;0.0}");
+            }
+            output.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"demo: inspiral {row.Id}: SNR injected {truth[t, "snr"]:F1}, fitted {row.Snr:F1}; truth inside the 90 % interval of {inside} of {row.ParameterNames.Length} parameters"));
+            output.WriteLine("  median - truth in posterior sigma:" + text);
+        }
+    }
+}

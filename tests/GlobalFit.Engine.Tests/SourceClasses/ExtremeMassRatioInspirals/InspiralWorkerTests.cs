@@ -1,0 +1,54 @@
+using GlobalFit.Engine.Fitting;
+using GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
+using GlobalFit.Physics.ExtremeMassRatioInspirals;
+using Xunit.Abstractions;
+using P = GlobalFit.Physics.ExtremeMassRatioInspirals.ExtremeMassRatioInspiralParameters;
+
+namespace GlobalFit.Engine.Tests.SourceClasses.ExtremeMassRatioInspirals;
+
+public class InspiralWorkerTests(ITestOutputHelper output)
+{
+    private static readonly P Source = InspiralFitFixture.Source;
+
+    [Fact]
+    public void A_restored_worker_continues_bit_for_bit()
+    {
+        var plan = InspiralFitFixture.Plan("search_evaluations = 20\ntemperatures = 2", ("a", Source));
+        var descriptor = plan.Groups[0].Workers[0];
+        var residual = InspiralFitFixture.Residual(descriptor.Bins, Source, 5);
+        var straight = plan.CreateWorker(descriptor.Id, 42);
+        straight.Update(residual, 5);
+        var expected = straight.Update(residual, 5);
+
+        var first = plan.CreateWorker(descriptor.Id, 42);
+        first.Update(residual, 5);
+        var restored = plan.RestoreWorker(descriptor.Id, first.SaveState());
+        var actual = restored.Update(residual, 5);
+
+        Assert.Equal(expected.Samples.Values, actual.Samples.Values);
+        Assert.Equal(expected.Samples.LogLikelihoods, actual.Samples.LogLikelihoods);
+        Assert.Equal(expected.Template!.A, actual.Template!.A);
+        Assert.Equal(straight.SaveState(), restored.SaveState());
+        // A restored worker serves the template of its saved state before its next update.
+        Assert.Equal(first.CurrentTemplate()!.A, plan.RestoreWorker(descriptor.Id, first.SaveState()).CurrentTemplate()!.A);
+    }
+
+    [Fact]
+    public void An_update_returns_the_template_over_its_window_and_one_sample_per_step_in_the_parameter_columns()
+    {
+        var plan = InspiralFitFixture.Plan("search_evaluations = 0\ntemperatures = 2", ("a", Source));
+        var descriptor = plan.Groups[0].Workers[0];
+        var worker = plan.CreateWorker(descriptor.Id, 1);
+        Assert.All(worker.CurrentTemplate()!.A, v => Assert.Equal(0.0, v.Magnitude));
+        var update = worker.Update(InspiralFitFixture.Residual(descriptor.Bins, Source, null), 7);
+        Assert.Equal(descriptor.Bins, update.Template!.Bins);
+        Assert.Null(update.Template.T);
+        Assert.Equal(7, update.Samples.SampleCount);
+        Assert.Equal(P.ColumnNames, update.Samples.ParameterNames);
+        Assert.Equal(7 * 14, update.Samples.Values.Length);
+        Assert.Equal(ExtremeMassRatioInspiralClass.Id, update.Samples.ClassId);
+        Assert.Equal(1, update.Statistics.SourceCount);
+        Assert.Empty(worker.TakeHandovers());
+        Assert.Throws<ArgumentException>(() => worker.Update(InspiralFitFixture.Residual(new(descriptor.Bins.First + 1, descriptor.Bins.Count), Source, null), 1));
+    }
+}

@@ -5,8 +5,8 @@ using P = GlobalFit.Physics.ExtremeMassRatioInspirals.ExtremeMassRatioInspiralPa
 
 namespace GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
 
-/// <summary>The inspiral of the built-in demo: one invented source, fitted from a start row a few posterior widths
-/// off its truth (as a catalogue row of an earlier, shorter analysis would be), and the comparison of its catalogue row
+/// <summary>The inspiral of the built-in demo: one invented source (SNR 43 over the month), fitted from a start row
+/// a posterior width or two off its truth (as a catalogue row of an earlier, shorter analysis would be), and the comparison of its catalogue row
 /// with the truth.</summary>
 internal sealed class InspiralDemo : IDemoPart
 {
@@ -23,12 +23,14 @@ internal sealed class InspiralDemo : IDemoPart
         lambda_rad = 2.0
         spin_theta_rad = 1.2
         spin_phi_rad = 0.7
-        distance_mpc = 1000
+        distance_mpc = 200
         phi0_rad = 1.0
         gamma0_rad = 0.5
         alpha0_rad = 2.5
         """;
 
+    // The start row is about one posterior width off in ν0 and ln M and two in Φ0 (widths at SNR 43 over the month:
+    // 8e-10 Hz, 5e-6, 0.01 rad), as the median of an earlier, shorter analysis would be.
     public string FitToml => """
         [extreme_mass_ratio_inspirals]
         steps_per_update = 60
@@ -37,18 +39,18 @@ internal sealed class InspiralDemo : IDemoPart
 
         [[extreme_mass_ratio_inspirals.start]]
         id = "demo-emri"
-        central_mass_msun = 5e5
+        central_mass_msun = 500002.5
         compact_mass_msun = 10
         central_spin = 0.6
-        orbital_frequency0_hz = 1.2e-3
+        orbital_frequency0_hz = 1.200001e-3
         eccentricity0 = 0.15
         orbit_inclination_rad = 0.8
         beta_rad = 0.4
         lambda_rad = 2.0
         spin_theta_rad = 1.2
         spin_phi_rad = 0.7
-        distance_mpc = 1000
-        phi0_rad = 1.0
+        distance_mpc = 200
+        phi0_rad = 1.02
         gamma0_rad = 0.5
         alpha0_rad = 2.5
         """;

@@ -162,10 +162,15 @@ internal sealed class InspiralWorker : IFitWorker
         double searchStatistic = double.NaN;
         if (_settings.SearchEvaluations > 0)
         {
-            var statistic = new SemiCoherentStatistic(_generator, Bins, _settings.SearchSegments, a, e, inverseA, inverseE);
+            var statistics = new List<SemiCoherentStatistic>();
+            for (int segments = _settings.SearchSegments; ; segments /= 2)
+            {
+                statistics.Add(new SemiCoherentStatistic(_generator, Bins, segments, a, e, inverseA, inverseE));
+                if (segments == 1) break;
+            }
             var random = RandomStream.ForPath(_state.RunSeed, StreamId, SearchStream);
             double[] x = new double[InspiralSamplingCoordinates.Dimension];
-            searchStatistic = InspiralStartSearch.Run(model, statistic, _settings.SearchEvaluations, _settings.SearchStepSigma, x, ref random);
+            searchStatistic = InspiralStartSearch.Run(model, statistics, _settings.SearchEvaluations, _settings.SearchStepSigma, x, ref random);
             double[] found = new double[InspiralSamplingCoordinates.Dimension];
             InspiralSamplingCoordinates.ToUnscaled(model.Coordinates.ToParameters(x), found);
             reference = found;

@@ -33,6 +33,7 @@ internal sealed class InspiralFitModel : ITargetModel, IFisherInformation
     private readonly ExtremeMassRatioInspiralTemplateGenerator _generator;
     private readonly BinWindow _window;
     private readonly double[] _inverseA, _inverseE;
+    private readonly Complex[] _dataA, _dataE;
     private readonly double[] _lower, _upper;
 
     /// <summary>Creates the model for one update.</summary>
@@ -45,6 +46,8 @@ internal sealed class InspiralFitModel : ITargetModel, IFisherInformation
         _window = window;
         _inverseA = inverseA;
         _inverseE = inverseE;
+        _dataA = dataA;
+        _dataE = dataE;
         _likelihood = new ExtremeMassRatioInspiralLikelihood(generator, window, dataA, dataE, inverseA, inverseE);
         (_lower, _upper) = (new double[InspiralSamplingCoordinates.Dimension], new double[InspiralSamplingCoordinates.Dimension]);
         ReadOnlySpan<double> low = [Math.Log(prior.MinCentralMassMsun), Math.Log(prior.MinCompactMassMsun), 0, prior.MinFrequencyHz, 0, -1, -1, 0, -1, 0, Math.Log(prior.MinDistanceMpc), 0, 0, 0];
@@ -106,7 +109,14 @@ internal sealed class InspiralFitModel : ITargetModel, IFisherInformation
     }
 
     /// <inheritdoc />
-    public void FisherMatrix(ReadOnlySpan<double> theta, Span<double> matrix)
+    public void FisherMatrix(ReadOnlySpan<double> theta, Span<double> matrix) => FisherAndGradient(theta, matrix, Span<double>.Empty);
+
+    /// <summary>The Fisher matrix at <paramref name="theta"/> and, when <paramref name="gradient"/> is not empty, the
+    /// gradient of ln L in the linear-signal approximation, g_i = (d − h | ∂_i h).</summary>
+    /// <param name="theta">Scaled coordinates.</param>
+    /// <param name="matrix">d×d output, row-major.</param>
+    /// <param name="gradient">d outputs, or empty.</param>
+    public void FisherAndGradient(ReadOnlySpan<double> theta, Span<double> matrix, Span<double> gradient)
     {
         int d = Dimension, n = _window.Count;
         var derivativesA = new Complex[d][];
@@ -122,14 +132,15 @@ internal sealed class InspiralFitModel : ITargetModel, IFisherInformation
             shifted[i] = theta[i] - FisherStep;
             bool down = double.IsFinite(LogPrior(shifted));
             double upStep = up ? FisherStep : 0, downStep = down ? FisherStep : 0;
-            if (upStep + downStep == 0) { derivativesA[i] = new Complex[n]; derivativesE[i] = new Complex[n]; continue; }
+            derivativesA[i] = new Complex[n];
+            derivativesE[i] = new Complex[n];
+            if (upStep + downStep == 0) continue;
             shifted[i] = theta[i] + upStep;
             Template(shifted, plusA, plusE);
             shifted[i] = theta[i] - downStep;
             Template(shifted, minusA, minusE);
             double inverse = 1.0 / (upStep + downStep);
-            var da = derivativesA[i] = new Complex[n];
-            var de = derivativesE[i] = new Complex[n];
+            var (da, de) = (derivativesA[i], derivativesE[i]);
             for (int k = 0; k < n; k++)
             {
                 da[k] = (plusA[k] - minusA[k]) * inverse;
@@ -144,6 +155,15 @@ internal sealed class InspiralFitModel : ITargetModel, IFisherInformation
                 matrix[i * d + j] = f;
                 matrix[j * d + i] = f;
             }
+        if (gradient.IsEmpty) return;
+        Template(theta, plusA, plusE);
+        for (int k = 0; k < n; k++)
+        {
+            plusA[k] = _dataA[k] - plusA[k];
+            plusE[k] = _dataE[k] - plusE[k];
+        }
+        for (int i = 0; i < d; i++)
+            gradient[i] = InnerProduct.Real(plusA, derivativesA[i], _inverseA, df) + InnerProduct.Real(plusE, derivativesE[i], _inverseE, df);
     }
 
     /// <summary>The template of scaled coordinates <paramref name="theta"/> over the window (outputs cleared first).</summary>

@@ -5,7 +5,7 @@ using P = GlobalFit.Physics.ExtremeMassRatioInspirals.ExtremeMassRatioInspiralPa
 
 namespace GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
 
-/// <summary>The inspiral of the built-in demo: one invented source (SNR 43 over the month), fitted from a start row
+/// <summary>The inspiral of the built-in demo: one invented source (SNR 32 over the demo's month and noise), fitted from a start row
 /// a posterior width or two off its truth (as a catalogue row of an earlier, shorter analysis would be), and the comparison of its catalogue row
 /// with the truth.</summary>
 internal sealed class InspiralDemo : IDemoPart
@@ -29,7 +29,7 @@ internal sealed class InspiralDemo : IDemoPart
         alpha0_rad = 2.5
         """;
 
-    // The start row is about one posterior width off in ν0 and ln M and two in Φ0 (widths at SNR 43 over the month:
+    // The start row is about one posterior width off in ν0 and ln M and two in Φ0 (widths at SNR 43 over a month of the default noise, measured by the worker tests:
     // 8e-10 Hz, 5e-6, 0.01 rad), as the median of an earlier, shorter analysis would be.
     public string FitToml => """
         [extreme_mass_ratio_inspirals]

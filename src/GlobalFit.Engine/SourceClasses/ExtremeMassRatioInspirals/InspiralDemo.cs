@@ -33,7 +33,7 @@ internal sealed class InspiralDemo : IDemoPart
     // 8e-10 Hz, 5e-6, 0.01 rad), as the median of an earlier, shorter analysis would be.
     public string FitToml => """
         [extreme_mass_ratio_inspirals]
-        steps_per_update = 60
+        steps_per_update = 120
         temperatures = 3
         search_evaluations = 150
 

@@ -23,10 +23,16 @@ public static class CommandLineApp
             ResumeCommand.Create(context),
             StatusCommand.Create(context),
             CatalogueCommand.Create(context),
+            CompareCommand.Create(context),
             TraceCommand.Create(context),
             DemoCommand.Create(context),
             BenchCommand.Create(context),
         };
+        if (EmptyArgument(args) is string empty)
+        {
+            context.Error.WriteLine($"error: {empty} is an empty string; every argument and option value of globalfit names a file, folder or value");
+            return ExitCodes.BadInput;
+        }
         ParseResult parse = root.Parse(args);
         if (parse.Errors.Count > 0)
         {
@@ -43,6 +49,11 @@ public static class CommandLineApp
             context.Error.WriteLine($"error: {e.Message}");
             return ExitCodes.BadInput;
         }
+        catch (FileWriteException e)
+        {
+            context.Error.WriteLine($"error: {e.Message}");
+            return ExitCodes.WriteFailed;
+        }
         catch (OperationCanceledException)
         {
             context.Error.WriteLine("interrupted");
@@ -55,5 +66,14 @@ public static class CommandLineApp
             context.Error.WriteLine($"error: internal error ({e.GetType().Name}: {e.Message}); {(log is null ? "no crash log could be written" : $"details in {log}")}");
             return ExitCodes.InternalError;
         }
+    }
+
+    // No command takes an empty value, and an empty path would otherwise reach the file system's argument checks.
+    private static string? EmptyArgument(string[] args)
+    {
+        for (int i = 0; i < args.Length; i++)
+            if (string.IsNullOrWhiteSpace(args[i]))
+                return i > 0 && args[i - 1].StartsWith("--", StringComparison.Ordinal) ? $"the value of {args[i - 1]}" : $"argument {i + 1}";
+        return null;
     }
 }

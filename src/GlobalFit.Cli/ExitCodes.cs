@@ -16,8 +16,8 @@ public static class ExitCodes
     /// <summary>A fit stopped because a worker failed repeatedly; its last complete iteration is checkpointed.</summary>
     public const int FitFailed = 3;
 
-    /// <summary>A fit stopped because a checkpoint or an iteration's samples could not be written (disk full, permission
-    /// lost, I/O error); the last good checkpoint is kept and the message names the file and the cause.</summary>
+    /// <summary>A file could not be written (disk full, permission lost, I/O error); the message names the file and the
+    /// cause, nothing half-written is left in its place, and a fit keeps its last good checkpoint.</summary>
     public const int WriteFailed = 4;
 
     /// <summary>Interrupted by the user (Ctrl-C).</summary>

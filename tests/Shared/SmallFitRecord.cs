@@ -27,7 +27,7 @@ internal static class SmallFitRecord
         [[galactic_binaries.binary]]
         id = "loud-a"
         f0_hz = 2.9712e-3
-        amp = 3e-22
+        amplitude = 3e-22
         beta_rad = 0.4
         lambda_rad = 1.2
         iota_rad = 0.8
@@ -36,7 +36,7 @@ internal static class SmallFitRecord
         [[galactic_binaries.binary]]
         id = "loud-b"
         f0_hz = 2.9911e-3
-        amp = 2e-22
+        amplitude = 2e-22
         beta_rad = -0.7
         lambda_rad = 4.0
         iota_rad = 1.4
@@ -45,7 +45,7 @@ internal static class SmallFitRecord
         [[galactic_binaries.binary]]
         id = "loud-c"
         f0_hz = 3.0305e-3
-        amp = 1e-22
+        amplitude = 1e-22
         beta_rad = 1.0
         lambda_rad = 5.5
         iota_rad = 0.3
@@ -66,13 +66,13 @@ internal static class SmallFitRecord
         seed = 99
         iterations = {{iterations}}
         burn_in = {{iterations / 2}}
-        checkpoint_every = {{checkpointEvery}}
+        checkpoint_every_iterations = {{checkpointEvery}}
         threads = {{threads}}
         [galactic_binaries]
         f_min_hz = 2.95e-3
         f_max_hz = 3.05e-3
         window_bins = 128
-        padding_bins = 48
+        margin_bins = 48
         steps_per_update = {{stepsPerUpdate}}
         temperatures = 3
         max_sources_per_window = 6
@@ -81,6 +81,5 @@ internal static class SmallFitRecord
         fstat_longitude_cells = 8
         [noise]
         steps_per_update = 30
-        foreground_fit_years = 1
         """;
 }

@@ -33,8 +33,8 @@ public static class SeriesBench
             b.AsSpan(bins / 2).CopyTo(target);
         }, 20);
         GC.KeepAlive(sink);
-        yield return new BenchFigure("inner_product_1e6_bins_gb_per_s", bytes / innerSeconds / 1e9, "noise-weighted inner product over 1e6 bins, bytes read per second");
-        yield return new BenchFigure("memory_copy_same_bytes_gb_per_s", bytes / copySeconds / 1e9, "memory copy of the same number of bytes (baseline)");
+        yield return new BenchFigure("inner_product_1e6_bins_gigabytes_per_s", bytes / innerSeconds / 1e9, "noise-weighted inner product over 1e6 bins, bytes read per second");
+        yield return new BenchFigure("memory_copy_same_bytes_gigabytes_per_s", bytes / copySeconds / 1e9, "memory copy of the same number of bytes (baseline)");
 
         const int n = 1 << 22;
         var data = new Complex[n];

@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using GlobalFit.Cli.Bench;
 using GlobalFit.Engine.Benchmarking;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Commands;
 
@@ -41,7 +42,7 @@ public static class BenchCommand
         else
         {
             foreach (var f in figures)
-                context.Out.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{f.Name,-40} {f.Value,14:G5}   {f.Description}"));
+                context.Out.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{f.Name,-40} {NumberText.Significant(f.Value, 5),14}   {f.Description}"));
         }
         return ExitCodes.Success;
     }

@@ -39,14 +39,15 @@ public static class DemoCommand
     private static int Run(CliContext context, string folder, bool force, int iterations)
     {
         string full = Path.GetFullPath(folder);
+        if (File.Exists(full)) throw new InvalidInputException(folder, "--out", "is a file, not a folder");
         bool ours = File.Exists(Path.Combine(full, MarkerFile));
         if (Directory.Exists(full) && !ours && Directory.EnumerateFileSystemEntries(full).Any() && !force)
             throw new InvalidInputException(folder, "--out", "exists and was not made by the demo; choose another folder or pass --force");
         Directory.CreateDirectory(full);
-        File.WriteAllText(Path.Combine(full, MarkerFile), "files in this folder were written by 'globalfit demo' and are replaced when it runs again\n");
+        WriteText(Path.Combine(full, MarkerFile), "files in this folder were written by 'globalfit demo' and are replaced when it runs again\n");
 
         string scenarioPath = Path.Combine(full, "scenario.toml");
-        File.WriteAllText(scenarioPath, DemoScenario.Toml);
+        WriteText(scenarioPath, DemoScenario.Toml);
         var scenario = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Parse(DemoScenario.Toml, "built-in demo scenario"));
         context.Out.WriteLine($"demo: simulating \"{scenario.Name}\" into {full}");
         string dataPath = Path.Combine(full, "data.h5");
@@ -59,25 +60,23 @@ public static class DemoCommand
         if (status != ExitCodes.Success) return status;
 
         string configPath = Path.Combine(full, "fit.toml");
-        File.WriteAllText(configPath, DemoFitConfig.Toml(iterations));
+        WriteText(configPath, DemoFitConfig.Toml(iterations));
         string runFolder = Path.Combine(full, "run");
         if (Directory.Exists(runFolder)) Directory.Delete(runFolder, recursive: true);
         context.Out.WriteLine();
         context.Out.WriteLine($"demo: fitting every class and the noise jointly ({configPath})");
-        var catalogue = System.Collections.Immutable.ImmutableArray<CatalogueRecord>.Empty;
-        status = FitCommand.Run(context, options => FitRunner.Start(configPath, options), otlp: null, completed: outcome => catalogue = outcome.Catalogue);
+        status = FitCommand.Run(context, options => FitRunner.Start(configPath, options), otlp: null, completed: null);
         if (status != ExitCodes.Success) return status;
 
         context.Out.WriteLine();
-        var plan = RunPlan.Load(new RunFolderLayout(runFolder).ResolvedConfig);
-        var observation = ObservationFile.Read(dataPath);
-        foreach (var classPlan in plan.Classes)
-        {
-            if (SourceClassRegistry.Default.Find(classPlan.ClassId)?.Demo is not { } part) continue;
-            part.Report(context.Out, classPlan, plan.Shape.DfHz, [.. catalogue.Where(r => r.ClassId == classPlan.ClassId)], observation.FindTruth(classPlan.ClassId));
-        }
+        context.Out.WriteLine($"demo: the catalogue against the truth (globalfit compare {runFolder} --truth {dataPath})");
+        status = CompareCommand.Run(context, runFolder, dataPath, CompareCommand.DefaultDetectableSnr, json: false);
+        if (status != ExitCodes.Success) return status;
         context.Out.WriteLine();
         context.Out.WriteLine($"demo: the run is in {runFolder}; try 'globalfit status {runFolder}', 'globalfit trace {runFolder}', 'globalfit catalogue {runFolder} --format json'");
         return ExitCodes.Success;
     }
+
+    private static void WriteText(string path, string text) =>
+        AtomicFile.Write(path, overwrite: true, stream => stream.Write(System.Text.Encoding.UTF8.GetBytes(text)));
 }

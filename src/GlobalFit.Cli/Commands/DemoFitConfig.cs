@@ -18,14 +18,11 @@ internal static class DemoFitConfig
         seed = 7
         iterations = {iterations}
         burn_in = {iterations / 3}
-        checkpoint_every = 8
+        checkpoint_every_iterations = 8
         """;
 
     private const string Noise = """
         [noise]
         steps_per_update = 40
-        # The demo scenario simulates the foreground of the one-year fit; the default would take the shape nearest
-        # the record's length (half a year), which is louder between 1 and 4 mHz.
-        foreground_fit_years = 1
         """;
 }

@@ -45,7 +45,7 @@ public static class FitCommand
         switch (outcome.Kind)
         {
             case FitOutcomeKind.Completed:
-                context.Out.WriteLine($"fit complete: {outcome.IterationsCompleted} iterations; catalogue of {outcome.Catalogue.Length} entries written (checkpoint at iteration {outcome.CheckpointIteration})");
+                context.Out.WriteLine($"fit complete: {outcome.IterationsCompleted} iterations; catalogue written ({string.Join(", ", outcome.Catalogue.GroupBy(r => r.ClassId).Select(g => $"{g.Key} {g.Count()}"))}) (checkpoint at iteration {outcome.CheckpointIteration})");
                 completed?.Invoke(outcome);
                 return ExitCodes.Success;
             case FitOutcomeKind.Interrupted:

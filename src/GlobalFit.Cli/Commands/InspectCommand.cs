@@ -43,15 +43,15 @@ public static class InspectCommand
         var p = r.Observation.Provenance;
         string I(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
         o.WriteLine(I($"file          {r.Path}"));
-        o.WriteLine(I($"format        version {r.Observation.FormatVersion}, written by {p.Generator} at {p.CreatedUtc:yyyy-MM-dd HH:mm:ss} UTC"));
+        o.WriteLine(I($"format        version {r.Observation.FormatVersion}, written by {p.Generator} at {UtcText.Format(p.CreatedUtc)}"));
         if (p.Entries.TryGetValue("scenario_name", out var name)) o.WriteLine($"scenario      {name}");
-        o.WriteLine(I($"time axis     t0 = {data.T0Seconds} s, cadence {data.DtSeconds} s, {data.Count} samples = {data.Count * data.DtSeconds / 86400:F3} days"));
+        o.WriteLine(I($"time axis     start {data.T0Seconds} s, cadence {data.DtSeconds} s, {data.Count} points = {data.Count * data.DtSeconds / 86400:F3} days"));
         o.WriteLine(I($"gaps          {r.Observation.Gaps.Count} ({r.Observation.Gaps.TotalSeconds / 3600:F2} h in total)"));
         o.WriteLine($"noise model   {r.ModelDescription}");
         if (r.Channels.Count > 0)
-            o.WriteLine(I($"Welch/model   {r.Welch[0].SegmentCount} segments of {r.Welch[0].SegmentLength} samples, band {r.Channels[0].BandLowHz * 1e3:G3}–{r.Channels[0].BandHighHz * 1e3:G3} mHz"));
+            o.WriteLine(I($"Welch/model   {r.Welch[0].SegmentCount} segments of {r.Welch[0].SegmentLength} points, band {NumberText.Significant(r.Channels[0].BandLowHz * 1e3, 3)}–{NumberText.Significant(r.Channels[0].BandHighHz * 1e3, 3)} mHz"));
         foreach (var c in r.Channels)
-            o.WriteLine(I($"  {c.Channel}  rms {c.RmsValue:E3}   mean estimate/model {c.MeanRatio:F4} ± {c.RatioStandardError:F4}   chi²/bin {c.ChiSquarePerBin:F3} over {c.BinsCompared} bins"));
+            o.WriteLine(I($"  {c.Channel}  rms {NumberText.Scientific(c.RmsValue, 2)}   mean estimate/model {c.MeanRatio:F4} ± {c.RatioStandardError:F4}   chi²/bin {c.ChiSquarePerBin:F3} over {c.BinsCompared} bins"));
         foreach (var x in r.CrossChannels)
             o.WriteLine(I($"  {x.Pair} mean coherence {x.MeanCoherence:F4} (independent noise: {x.ExpectedForIndependent:F4})"));
         if (r.Injected.Count == 0) o.WriteLine("injected      none");
@@ -65,16 +65,33 @@ public static class InspectCommand
 
     private static void WriteChart(ObservationInspection r, string png)
     {
+        byte[] bytes = Chart(r).ToPng();
+        AtomicFile.Write(png, overwrite: true, stream => stream.Write(bytes));
+    }
+
+    // One colour per channel (blue, orange and green stay apart for the common colour-vision deficiencies); the Welch
+    // estimate solid, the model dashed; the band the statistics compare shaded; the legend beside the data.
+    internal static readonly IReadOnlyDictionary<AetChannel, string> ChannelColors = new Dictionary<AetChannel, string>
+    {
+        [AetChannel.A] = "#1F77B4",
+        [AetChannel.E] = "#FF7F0E",
+        [AetChannel.T] = "#2CA02C",
+    };
+
+    internal static LogLogChart Chart(ObservationInspection r)
+    {
         var chart = new LogLogChart("Welch estimate against the noise model", "frequency [Hz]", "PSD [1/Hz] (fractional frequency)");
+        if (r.Channels.Count > 0)
+            chart.MarkBand(r.Channels[0].BandLowHz, r.Channels[0].BandHighHz,
+                $"band the statistics compare ({NumberText.Significant(r.Channels[0].BandLowHz * 1e3, 3)}–{NumberText.Significant(r.Channels[0].BandHighHz * 1e3, 3)} mHz)");
         var channels = new[] { AetChannel.A, AetChannel.E, AetChannel.T };
         for (int c = 0; c < 3; c++)
         {
             var welch = r.Welch[c];
             var f = welch.FrequenciesHz();
-            chart.AddCurve($"{channels[c]} estimate", f, welch.Psd);
-            chart.AddCurve($"{channels[c]} model", f, f.Select(x => r.Model.Psd(channels[c], x)).ToArray());
+            chart.AddCurve($"{channels[c]} estimate", f, welch.Psd, ChannelColors[channels[c]], dashed: false);
+            chart.AddCurve($"{channels[c]} model", f, f.Select(x => r.Model.Psd(channels[c], x)).ToArray(), ChannelColors[channels[c]], dashed: true);
         }
-        byte[] bytes = chart.ToPng();
-        AtomicFile.Write(png, overwrite: true, stream => stream.Write(bytes));
+        return chart;
     }
 }

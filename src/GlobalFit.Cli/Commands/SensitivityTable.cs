@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using GlobalFit.Physics.Noise;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Commands;
 
@@ -41,7 +42,7 @@ internal sealed record SensitivityTable(
         for (int i = 0; i < FrequencyHz.Length; i++)
         {
             text.Append(string.Join(',', new[] { FrequencyHz[i], PsdA[i], PsdE[i], PsdT[i], ExactStrainPsd[i], RobsonStrainPsd[i], ForegroundStrainPsd[i] }
-                .Select(v => v.ToString("R", CultureInfo.InvariantCulture))));
+                .Select(NumberText.RoundTrip)));
             text.Append('\n');
         }
         return text.ToString();

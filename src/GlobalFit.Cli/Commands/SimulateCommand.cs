@@ -19,15 +19,23 @@ public static class SimulateCommand
         var output = new Option<string>("--out") { Description = "Observation file to write (HDF5)", Required = true };
         var force = new Option<bool>("--force") { Description = "Replace an existing output file" };
         var json = new Option<bool>("--json") { Description = "Print a JSON summary instead of text" };
-        var command = new Command("simulate", "Simulate TDI A/E/T data (noise and foreground) from a scenario file") { scenario, output, force, json };
-        command.SetAction(parse => Run(context, parse.GetValue(scenario)!, parse.GetValue(output)!, parse.GetValue(force), parse.GetValue(json)));
+        var seed = new Option<ulong?>("--seed") { Description = "Use this seed instead of the scenario's (recorded in the file's resolved scenario)" };
+        var command = new Command("simulate", "Simulate TDI A/E/T data (noise and foreground) from a scenario file") { scenario, output, force, json, seed };
+        command.SetAction(parse => Run(context, parse.GetValue(scenario)!, parse.GetValue(output)!, parse.GetValue(force), parse.GetValue(json), parse.GetValue(seed)));
         return command;
     }
 
-    /// <summary>Simulates <paramref name="scenarioPath"/> into <paramref name="outputPath"/>; shared with <c>demo</c>.</summary>
-    public static int Run(CliContext context, string scenarioPath, string outputPath, bool force, bool json)
+    /// <summary>Simulates <paramref name="scenarioPath"/> into <paramref name="outputPath"/>.</summary>
+    /// <param name="context">Console.</param>
+    /// <param name="scenarioPath">The scenario file.</param>
+    /// <param name="outputPath">The observation file to write.</param>
+    /// <param name="force">Replace an existing output.</param>
+    /// <param name="json">Print JSON.</param>
+    /// <param name="seed">A seed replacing the scenario's, or null.</param>
+    public static int Run(CliContext context, string scenarioPath, string outputPath, bool force, bool json, ulong? seed = null)
     {
         var scenario = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Load(scenarioPath));
+        if (seed is { } s) scenario = scenario with { Seed = s };
         return Run(context, scenario, scenarioPath, outputPath, force, json);
     }
 
@@ -50,7 +58,7 @@ public static class SimulateCommand
                 ["file"] = target,
                 ["scenario"] = scenario.Name,
                 ["seed"] = scenario.Seed,
-                ["samples_per_channel"] = data.Count,
+                ["points_per_channel"] = data.Count,
                 ["cadence_s"] = data.DtSeconds,
                 ["duration_s"] = data.Count * data.DtSeconds,
             }));
@@ -58,7 +66,7 @@ public static class SimulateCommand
         else
         {
             context.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"wrote {target}: scenario \"{scenario.Name}\", seed {scenario.Seed}, {data.Count} samples per channel at {data.DtSeconds} s ({data.Count * data.DtSeconds / 86400:F2} days)"));
+                $"wrote {target}: scenario \"{scenario.Name}\", seed {scenario.Seed}, {data.Count} points per channel at {data.DtSeconds} s ({data.Count * data.DtSeconds / 86400:F2} days)"));
         }
         return ExitCodes.Success;
     }

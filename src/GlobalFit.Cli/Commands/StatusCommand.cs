@@ -34,30 +34,23 @@ public static class StatusCommand
             .ToImmutableSortedDictionary(g => g.Key, g => g.Sum(w => w.Value), StringComparer.Ordinal);
         if (json)
         {
-            context.Out.WriteLine(CliJson.Serialize(new Dictionary<string, object>
+            context.Out.WriteLine((status with
             {
-                ["run"] = layout.Root,
-                ["state"] = alive ? "running" : status.State == "running" ? "stopped" : status.State,
-                ["iteration"] = status.Iteration,
-                ["iterations_total"] = status.TotalIterations,
-                ["checkpoint_iteration"] = status.CheckpointIteration,
-                ["updated_utc"] = status.UpdatedUtc.ToString("O", CultureInfo.InvariantCulture),
-                ["sources"] = status.SourcesPerClass,
-                ["samples_stored"] = samples,
-                ["slowest_workers"] = status.SlowestWorkers.Select(s => new Dictionary<string, object> { ["worker"] = s.WorkerId, ["compute_ms"] = s.ComputeMs }).ToList(),
-                ["message"] = status.Message,
-            }));
+                State = alive ? "running" : status.State == "running" ? "stopped" : status.State,
+                Run = layout.Root,
+                SamplesStored = samples,
+            }).ToJson());
             return ExitCodes.Success;
         }
         var o = context.Out;
         o.WriteLine($"run        {layout.Root}");
         o.WriteLine($"state      {state}");
-        o.WriteLine(string.Create(CultureInfo.InvariantCulture, $"iteration  {status.Iteration}/{status.TotalIterations} (last iteration {status.LastIterationSeconds:F2} s; updated {status.UpdatedUtc:u})"));
+        o.WriteLine(string.Create(CultureInfo.InvariantCulture, $"iteration  {status.Iteration}/{status.TotalIterations} (last iteration {status.LastIterationSeconds:F2} s; updated {UtcText.Format(status.UpdatedUtc)})"));
         o.WriteLine($"checkpoint iteration {status.CheckpointIteration}");
         o.WriteLine($"sources    {string.Join(", ", status.SourcesPerClass.Select(c => $"{c.Key} {c.Value}"))}");
         o.WriteLine($"stored     {string.Join(", ", samples.Select(c => $"{c.Key} {c.Value} samples"))}");
         if (status.SlowestWorkers.Length > 0)
-            o.WriteLine($"slowest    {string.Join(", ", status.SlowestWorkers.Select(s => string.Create(CultureInfo.InvariantCulture, $"{s.WorkerId} {s.ComputeMs:F0} ms")))}");
+            o.WriteLine($"slowest    {string.Join(", ", status.SlowestWorkers.OrderByDescending(s => s.ComputeMs).Select(s => string.Create(CultureInfo.InvariantCulture, $"{s.WorkerId} {s.ComputeMs:F0} ms")))}");
         if (status.Message.Length > 0) o.WriteLine($"message    {status.Message}");
         return ExitCodes.Success;
     }

@@ -7,7 +7,8 @@ using GlobalFit.Physics.Files;
 namespace GlobalFit.Cli.Commands;
 
 /// <summary><c>globalfit trace RUN</c>: per iteration, which worker each stage waited for, by how much, and how much of
-/// the iteration was orchestration rather than compute; read from <c>RUN/telemetry.jsonl</c>.</summary>
+/// the iteration was orchestration rather than compute; read from <c>RUN/telemetry.jsonl</c>. Each worker's id comes
+/// with what it covers (a band's frequency range, a source's id), and stages are numbered from 1 like iterations.</summary>
 public static class TraceCommand
 {
     /// <summary>How many of the most often critical workers the text summary lists (JSON lists all).</summary>
@@ -57,19 +58,22 @@ public static class TraceCommand
             {
                 if (s.CriticalWorkerId is null)
                 {
-                    o.WriteLine(I($"  stage {s.StageIndex}   no worker updates recorded"));
+                    o.WriteLine(I($"  stage {s.StageIndex + 1}   no worker updates recorded"));
                     continue;
                 }
                 string others = s.LeadMs is not double lead ? ", the only worker"
                     : s.WorkerCount == 2 ? I($", {lead:F1} ms after the other, which waited {s.TotalWaitMs:F1} ms")
                     : I($", {lead:F1} ms after the next; {s.WorkerCount - 1} others waited {s.TotalWaitMs:F1} ms in total ({s.MeanWaitMs:F1} ms each)");
-                o.WriteLine(I($"  stage {s.StageIndex}   last: {s.CriticalWorkerId} (compute {s.CriticalWorkerWallMs:F1} ms){others}"));
+                o.WriteLine(I($"  stage {s.StageIndex + 1}   last: {Named(s.CriticalWorkerId, s.CriticalWorkerLabel)} (compute {s.CriticalWorkerWallMs:F1} ms){others}"));
             }
         }
         var m = report.Summary;
         o.WriteLine(I($"summary       {m.IterationCount} iterations, mean {m.MeanIterationMs:F1} ms, mean overhead {m.MeanOverheadMs:F1} ms = {m.MeanOverheadPercentOfIteration:F1} % of the iteration")
             + (m.MeanOverheadPercentOfCompute is double c ? I($", {c:F1} % of worker compute") : ""));
         foreach (var w in m.MostOftenCritical.Take(TextSummaryWorkers))
-            o.WriteLine(I($"  last in {w.Stages,4} stage(s)   {w.WorkerId}"));
+            o.WriteLine(I($"  last in {w.Stages,4} stage(s)   {Named(w.WorkerId, w.Label)}"));
     }
+
+    // The opaque id with what the worker covers beside it: "galactic_binaries/0003 [2.9700-3.0086 mHz]".
+    private static string Named(string id, string? label) => label is null || label == id ? id : $"{id} [{label}]";
 }

@@ -3,7 +3,7 @@ using GlobalFit.Engine.Telemetry;
 namespace GlobalFit.Cli.Commands;
 
 /// <summary>The JSON shape of <c>globalfit trace --json</c> (snake_case keys, units in the names; null where a figure
-/// does not exist, e.g. the lead of a stage with one worker).</summary>
+/// does not exist, e.g. the lead of a stage with one worker). Stages are numbered from 1, as iterations are.</summary>
 internal static class TraceJson
 {
     public static Dictionary<string, object?> From(CriticalPathReport report) => new()
@@ -20,9 +20,10 @@ internal static class TraceJson
             ["overhead_fraction_of_compute"] = i.OverheadFractionOfCompute,
             ["stages"] = i.Stages.Select(s => new Dictionary<string, object?>
             {
-                ["stage"] = s.StageIndex,
+                ["stage"] = s.StageIndex + 1,
                 ["workers"] = s.WorkerCount,
                 ["last_worker"] = s.CriticalWorkerId,
+                ["last_worker_label"] = s.CriticalWorkerLabel,
                 ["last_worker_wall_ms"] = s.CriticalWorkerWallMs,
                 ["lead_ms"] = s.LeadMs,
                 ["others_total_wait_ms"] = s.TotalWaitMs,
@@ -40,6 +41,7 @@ internal static class TraceJson
             ["most_often_last"] = report.Summary.MostOftenCritical.Select(c => new Dictionary<string, object?>
             {
                 ["worker"] = c.WorkerId,
+                ["label"] = c.Label,
                 ["stages"] = c.Stages,
             }).ToArray(),
         },

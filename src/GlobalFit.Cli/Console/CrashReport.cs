@@ -1,4 +1,5 @@
 using System.Globalization;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Cli.Console;
 
@@ -21,7 +22,7 @@ public static class CrashReport
             string stamp = DateTime.UtcNow.ToString("yyyyMMdd'T'HHmmss'Z'", CultureInfo.InvariantCulture);
             string path = Path.Combine(folder ?? Path.GetTempPath(), $"globalfit-crash-{stamp}-{Environment.ProcessId}.log");
             File.WriteAllText(path, $"""
-                {ProgramInfo.Generator} crashed at {DateTime.UtcNow.ToString("yyyy-MM-dd'T'HH:mm:ss'Z'", CultureInfo.InvariantCulture)}
+                {ProgramInfo.Generator} crashed at {UtcText.Format(DateTimeOffset.UtcNow)}
                 command line: globalfit {string.Join(' ', args)}
 
                 {error}

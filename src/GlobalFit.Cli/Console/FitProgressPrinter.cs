@@ -5,8 +5,10 @@ using GlobalFit.Engine.Runs;
 
 namespace GlobalFit.Cli.Console;
 
-/// <summary>Shows a fit's progress: on a terminal one redrawn line (iteration, ETA, ln L, sources per class); when
+/// <summary>Shows a fit's progress: on a terminal one redrawn line (iteration, ETA, ΔlnL, sources per class); when
 /// redirected, a plain line at most every ten seconds plus the first and last iterations, so logs stay short.</summary>
+/// <remarks>ΔlnL is the change of the summed cold-chain ln L since the iteration before, not ln L itself: the sum runs
+/// to millions on long records, where a change of a few units (a source found or lost) would hide in the digits.</remarks>
 /// <remarks>Called from the coordinator's thread; writes are serialised by a lock because warnings may come from
 /// elsewhere.</remarks>
 public sealed class FitProgressPrinter : IFitProgress
@@ -18,6 +20,8 @@ public sealed class FitProgressPrinter : IFitProgress
     private readonly Lock _gate = new();
     private TimeSpan _lastPlain = TimeSpan.MinValue;
     private long _firstIteration = -1;
+    private long _previousIteration = -1;
+    private double _previousLogLikelihood = double.NaN;
     private bool _lineOpen;
 
     /// <summary>Creates a printer writing to the context's error stream.</summary>
@@ -36,6 +40,8 @@ public sealed class FitProgressPrinter : IFitProgress
         {
             if (_firstIteration < 0) _firstIteration = report.Iteration - 1;
             string line = Describe(report);
+            _previousIteration = report.Iteration;
+            _previousLogLikelihood = report.LogLikelihood;
             if (_interactive)
             {
                 _writer.Write("\r" + line.PadRight(110));
@@ -60,6 +66,16 @@ public sealed class FitProgressPrinter : IFitProgress
         }
     }
 
+    /// <inheritdoc />
+    public void Note(string message)
+    {
+        lock (_gate)
+        {
+            EndLine();
+            _writer.WriteLine(message);
+        }
+    }
+
     /// <summary>Ends a redrawn line left open.</summary>
     public void EndLine()
     {
@@ -75,6 +91,12 @@ public sealed class FitProgressPrinter : IFitProgress
         var eta = done > 0 ? TimeSpan.FromSeconds(_clock.Elapsed.TotalSeconds / done * left) : TimeSpan.Zero;
         string sources = string.Join(" ", report.SourcesPerClass.Select(c => $"{c.Key}={c.Value}"));
         return string.Create(CultureInfo.InvariantCulture,
-            $"iteration {report.Iteration}/{report.TotalIterations}  {report.WallTime.TotalSeconds:F2} s  ETA {eta:hh\\:mm\\:ss}  lnL {report.LogLikelihood:F1}  sources {sources}{(report.Checkpointed ? "  [checkpoint]" : "")}");
+            $"iteration {report.Iteration}/{report.TotalIterations}  {report.WallTime.TotalSeconds:F2} s  ETA {eta:hh\\:mm\\:ss}  ΔlnL {Change(report)}  sources {sources}{(report.Checkpointed ? "  [checkpoint]" : "")}");
     }
+
+    // The first iteration this process saw (also the first after a resume) has no predecessor to differ from.
+    private string Change(IterationReport report) =>
+        _previousIteration == report.Iteration - 1 && double.IsFinite(_previousLogLikelihood)
+            ? (report.LogLikelihood - _previousLogLikelihood).ToString("+0.0;-0.0;0.0", CultureInfo.InvariantCulture)
+            : "n/a";
 }

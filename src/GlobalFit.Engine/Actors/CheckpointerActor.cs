@@ -18,7 +18,9 @@ public sealed class CheckpointerActor : ReceiveActor
             {
                 CheckpointFile.Write(runFolder, m.Checkpoint);
             }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException or InvalidInputException)
+            // Any failure is reported, whatever its type: an exception escaping here would restart the actor and leave
+            // the coordinator waiting for a reply that never comes.
+            catch (Exception e)
             {
                 problem = e.Message;
             }

@@ -23,4 +23,9 @@ public sealed record CoordinatorSetup(
     IActorRef Store,
     IActorRef Checkpointer,
     IFitProgress Progress,
-    Func<string, byte[]?, IFitWorker> CreateWorker);
+    Func<string, byte[]?, IFitWorker> CreateWorker)
+{
+    /// <summary>Receives each worker failure with its full exception (stack trace included), for the run's failure log;
+    /// the terminal gets one line through <see cref="Progress"/>.</summary>
+    public Action<string, Exception> RecordFailure { get; init; } = (_, _) => { };
+}

@@ -49,15 +49,20 @@ public sealed class FitCoordinator : ReceiveActor, IStageHost
     public static Props Props(CoordinatorSetup setup) => Akka.Actor.Props.Create(() => new FitCoordinator(setup));
 
     /// <inheritdoc />
-    protected override SupervisorStrategy SupervisorStrategy() => new OneForOneStrategy(error =>
+    // Akka's own logging of the failure is off: it would print the stack trace on the terminal. The trace goes to the
+    // run's failure log and to telemetry; the terminal gets the one-line warning of the stage machine.
+    protected override SupervisorStrategy SupervisorStrategy() => new OneForOneStrategy(-1, -1, error =>
     {
         if (error is WorkerFailedException failed)
         {
-            _self.Tell(new WorkerFailed(failed.WorkerId, failed.InnerException ?? failed));
+            var cause = failed.InnerException ?? failed;
+            FitTelemetry.RecordWorkerFailure(failed.WorkerId, cause);
+            _setup.RecordFailure(failed.WorkerId, cause);
+            _self.Tell(new WorkerFailed(failed.WorkerId, cause));
             return Directive.Restart;
         }
         return Directive.Escalate;
-    });
+    }, loggingEnabled: false);
 
     void IStageHost.LoadWorker(string workerId, byte[]? state)
     {

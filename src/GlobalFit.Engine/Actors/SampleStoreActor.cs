@@ -18,9 +18,9 @@ public sealed class SampleStoreActor : ReceiveActor
             {
                 store.Append(m.Blocks);
             }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException or InvalidInputException)
+            catch (Exception e)
             {
-                // Answered, never thrown: a crashed store would leave the coordinator waiting for ever.
+                // Answered, never thrown, whatever the failure: a crashed store would leave the coordinator waiting for ever.
                 problem = e.Message;
             }
             Sender.Tell(new SamplesAppended(m.Iteration, problem));

@@ -19,7 +19,7 @@ public static class CatalogueCsvWriter
 
     /// <summary>Writes <paramref name="records"/> to <paramref name="path"/>, atomically.</summary>
     /// <param name="path">Destination.</param>
-    /// <param name="records">The entries, written in this order.</param>
+    /// <param name="records">The sources, written in this order.</param>
     /// <param name="overwrite">Replace an existing file.</param>
     /// <exception cref="InvalidInputException">The file exists and <paramref name="overwrite"/> is false, or cannot be written.</exception>
     /// <exception cref="ArgumentException">A record is inconsistent.</exception>
@@ -31,7 +31,7 @@ public static class CatalogueCsvWriter
     }
 
     /// <summary>The CSV text of <paramref name="records"/>: a header line, then one line per record, lines ending in LF.</summary>
-    /// <param name="records">The entries.</param>
+    /// <param name="records">The sources.</param>
     /// <returns>The text.</returns>
     public static string Format(IReadOnlyList<CatalogueRecord> records)
     {
@@ -54,8 +54,8 @@ public static class CatalogueCsvWriter
         return text.ToString();
     }
 
-    // Round-trip formatting: reading the file back gives the same doubles.
-    private static string Number(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+    // Round-trip formatting (reading the file back gives the same doubles) with two-digit exponents: 7.43e-21.
+    private static string Number(double value) => NumberText.RoundTrip(value);
 
     private static string Quote(string field) =>
         field.AsSpan().IndexOfAny(",\"\n\r") < 0 ? field : "\"" + field.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"";

@@ -1,3 +1,4 @@
+using System.Reflection;
 using PureHDF;
 
 namespace GlobalFit.Engine.Catalogue;
@@ -6,7 +7,7 @@ namespace GlobalFit.Engine.Catalogue;
 public static class CatalogueHdf5Layout
 {
     /// <summary>The layout version this program writes.</summary>
-    public const int FormatVersion = 1;
+    public const int FormatVersion = 2;
 
     /// <summary>Root attribute holding <see cref="FormatVersion"/>.</summary>
     public const string FormatVersionAttribute = "format_version";
@@ -17,30 +18,40 @@ public static class CatalogueHdf5Layout
     /// <summary>Attribute of a class group (and of its 2-D datasets): the parameter names, in column order.</summary>
     public const string ColumnsAttribute = "columns";
 
-    /// <summary>Compound dataset [R] of <see cref="CatalogueEntryRow"/>.</summary>
-    public const string EntriesDataset = "entries";
+    /// <summary>Compound dataset [R] of <see cref="CatalogueSourceRow"/>: one row per catalogued source.</summary>
+    public const string SourcesDataset = "sources";
 
-    /// <summary>float64 [R, C]: per-entry medians.</summary>
+    /// <summary>float64 [R, C]: per-source medians.</summary>
     public const string MedianDataset = "median";
 
-    /// <summary>float64 [R, C]: per-entry 5 % quantiles.</summary>
+    /// <summary>float64 [R, C]: per-source 5 % quantiles.</summary>
     public const string LowerDataset = "lower";
 
-    /// <summary>float64 [R, C]: per-entry 95 % quantiles.</summary>
+    /// <summary>float64 [R, C]: per-source 95 % quantiles.</summary>
     public const string UpperDataset = "upper";
 
-    /// <summary>float64 [S, C]: every entry's posterior samples, entry after entry.</summary>
+    /// <summary>float64 [S, C]: every source's posterior samples, source after source.</summary>
     public const string SamplesDataset = "samples";
 
-    /// <summary>int64 [S]: the entry row each sample row belongs to.</summary>
-    public const string SampleEntryDataset = "sample_entry";
+    /// <summary>int64 [S]: the source row each sample row belongs to.</summary>
+    public const string SampleSourceDataset = "sample_source";
+
+    /// <summary>Options that write the compound members under their <see cref="H5NameAttribute"/> names.</summary>
+    /// <remarks>PureHDF 2.2.0 names compound members after the C# fields, on writing and on reading alike, unless
+    /// a field-name mapper says otherwise; without it the members were written `Id`, `Confidence`, ….</remarks>
+    public static H5WriteOptions WriteOptions { get; } = new(FieldNameMapper: MemberName);
+
+    /// <summary>Options that read the compound members by their <see cref="H5NameAttribute"/> names.</summary>
+    public static H5ReadOptions ReadOptions { get; } = new(FieldNameMapper: MemberName);
+
+    private static string MemberName(FieldInfo field) => field.GetCustomAttribute<H5NameAttribute>()?.Name ?? field.Name;
 }
 
-/// <summary>One row of the <c>entries</c> compound dataset.</summary>
+/// <summary>One row of the <c>sources</c> compound dataset.</summary>
 /// <remarks>Public fields because PureHDF maps the fields of a struct to compound members.</remarks>
-public struct CatalogueEntryRow
+public struct CatalogueSourceRow
 {
-    /// <summary>Entry id, e.g. <c>gb-0001</c> (variable-length UTF-8 text).</summary>
+    /// <summary>Source id, e.g. <c>gb-0001</c> (variable-length UTF-8 text).</summary>
     [H5Name("id")]
     public string Id;
 
@@ -52,11 +63,11 @@ public struct CatalogueEntryRow
     [H5Name("snr")]
     public double Snr;
 
-    /// <summary>First row of this entry in the <c>samples</c> dataset.</summary>
+    /// <summary>First row of this source in the <c>samples</c> dataset.</summary>
     [H5Name("first_sample")]
     public long FirstSample;
 
-    /// <summary>Number of rows of this entry in the <c>samples</c> dataset.</summary>
+    /// <summary>Number of rows of this source in the <c>samples</c> dataset.</summary>
     [H5Name("sample_count")]
     public long SampleCount;
 }

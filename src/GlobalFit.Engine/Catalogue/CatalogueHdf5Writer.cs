@@ -6,12 +6,12 @@ using PureHDF;
 namespace GlobalFit.Engine.Catalogue;
 
 /// <summary>Writes catalogue records with their posterior samples to an HDF5 file in our layout (Catalogue/LAYOUT.md):
-/// <c>/catalogue/&lt;class id&gt;/entries</c>, summaries and <c>samples</c>.</summary>
+/// <c>/catalogue/&lt;class id&gt;/sources</c>, summaries and <c>samples</c>.</summary>
 public static class CatalogueHdf5Writer
 {
     /// <summary>Writes <paramref name="records"/> to <paramref name="path"/>, atomically.</summary>
     /// <param name="path">Destination.</param>
-    /// <param name="records">The entries; rows of a class keep this order.</param>
+    /// <param name="records">The sources; rows of a class keep this order.</param>
     /// <param name="overwrite">Replace an existing file.</param>
     /// <exception cref="InvalidInputException">The file exists and <paramref name="overwrite"/> is false, or cannot be written.</exception>
     /// <exception cref="ArgumentException">A record is inconsistent, or the records of one class differ in parameters.</exception>
@@ -23,7 +23,7 @@ public static class CatalogueHdf5Writer
         foreach (var group in records.GroupBy(r => r.ClassId, StringComparer.Ordinal).OrderBy(g => g.Key, StringComparer.Ordinal))
             catalogue[group.Key] = ClassGroup([.. group]);
         file[L.CatalogueGroup] = catalogue;
-        AtomicFile.Write(path, overwrite, stream => file.Write(stream));
+        AtomicFile.Write(path, overwrite, stream => file.Write(stream, L.WriteOptions));
     }
 
     private static H5Group ClassGroup(IReadOnlyList<CatalogueRecord> records)
@@ -31,7 +31,7 @@ public static class CatalogueHdf5Writer
         string[] columns = [.. records[0].ParameterNames];
         int width = columns.Length;
         long sampleRows = records.Sum(r => (long)r.SampleCount);
-        var entries = new CatalogueEntryRow[records.Count];
+        var sources = new CatalogueSourceRow[records.Count];
         var median = new double[checked(records.Count * width)];
         var lower = new double[median.Length];
         var upper = new double[median.Length];
@@ -41,7 +41,7 @@ public static class CatalogueHdf5Writer
         for (int e = 0; e < records.Count; e++)
         {
             var r = records[e];
-            entries[e] = new CatalogueEntryRow { Id = r.Id, Confidence = r.Confidence, Snr = r.Snr, FirstSample = row, SampleCount = r.SampleCount };
+            sources[e] = new CatalogueSourceRow { Id = r.Id, Confidence = r.Confidence, Snr = r.Snr, FirstSample = row, SampleCount = r.SampleCount };
             r.Median.CopyTo(median, e * width);
             r.Lower.CopyTo(lower, e * width);
             r.Upper.CopyTo(upper, e * width);
@@ -52,12 +52,12 @@ public static class CatalogueHdf5Writer
         return new H5Group
         {
             Attributes = { [L.ColumnsAttribute] = columns },
-            [L.EntriesDataset] = entries,
+            [L.SourcesDataset] = sources,
             [L.MedianDataset] = Table(median, records.Count, columns),
             [L.LowerDataset] = Table(lower, records.Count, columns),
             [L.UpperDataset] = Table(upper, records.Count, columns),
             [L.SamplesDataset] = Table(samples, sampleRows, columns),
-            [L.SampleEntryDataset] = sampleEntry,
+            [L.SampleSourceDataset] = sampleEntry,
         };
     }
 

@@ -8,39 +8,42 @@ namespace GlobalFit.Engine.Catalogue;
 public static class CatalogueJsonWriter
 {
     /// <summary>Version of the JSON shape, written as <c>format_version</c>.</summary>
-    public const int FormatVersion = 1;
+    public const int FormatVersion = 2;
 
     /// <summary>Writes <paramref name="records"/> to <paramref name="path"/>, atomically.</summary>
     /// <param name="path">Destination.</param>
-    /// <param name="records">The entries, written in this order.</param>
+    /// <param name="records">The sources, written in this order.</param>
     /// <param name="overwrite">Replace an existing file.</param>
     /// <exception cref="InvalidInputException">The file exists and <paramref name="overwrite"/> is false, or cannot be written.</exception>
     /// <exception cref="ArgumentException">A record is inconsistent.</exception>
-    public static void Write(string path, IReadOnlyList<CatalogueRecord> records, bool overwrite)
+    /// <param name="includeSamples">Write each source's posterior samples (false: summaries only; samples grow to
+    /// gigabytes on long runs).</param>
+    public static void Write(string path, IReadOnlyList<CatalogueRecord> records, bool overwrite, bool includeSamples = true)
     {
         CatalogueRecordChecks.Require(records);
         AtomicFile.Write(path, overwrite, stream =>
         {
             using var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = false });
-            WriteDocument(json, records);
+            WriteDocument(json, records, includeSamples);
         });
     }
 
     /// <summary>The document as text, for printing.</summary>
-    /// <param name="records">The entries, in this order.</param>
-    public static string Format(IReadOnlyList<CatalogueRecord> records)
+    /// <param name="records">The sources, in this order.</param>
+    /// <param name="includeSamples">Write each source's posterior samples.</param>
+    public static string Format(IReadOnlyList<CatalogueRecord> records, bool includeSamples = true)
     {
         CatalogueRecordChecks.Require(records);
         using var buffer = new MemoryStream();
-        using (var json = new Utf8JsonWriter(buffer, new JsonWriterOptions { Indented = false })) WriteDocument(json, records);
+        using (var json = new Utf8JsonWriter(buffer, new JsonWriterOptions { Indented = false })) WriteDocument(json, records, includeSamples);
         return System.Text.Encoding.UTF8.GetString(buffer.ToArray());
     }
 
-    private static void WriteDocument(Utf8JsonWriter json, IReadOnlyList<CatalogueRecord> records)
+    private static void WriteDocument(Utf8JsonWriter json, IReadOnlyList<CatalogueRecord> records, bool includeSamples)
     {
         json.WriteStartObject();
         json.WriteNumber("format_version", FormatVersion);
-        json.WriteStartArray("entries");
+        json.WriteStartArray("sources");
         foreach (var r in records)
         {
             json.WriteStartObject();
@@ -54,6 +57,12 @@ public static class CatalogueJsonWriter
             WriteSummary(json, "median", r.ParameterNames, r.Median);
             WriteSummary(json, "lower", r.ParameterNames, r.Lower);
             WriteSummary(json, "upper", r.ParameterNames, r.Upper);
+            json.WriteNumber("sample_count", r.SampleCount);
+            if (!includeSamples)
+            {
+                json.WriteEndObject();
+                continue;
+            }
             json.WriteStartArray("samples");
             int width = r.ParameterNames.Length;
             for (int s = 0; s < r.SampleCount; s++)

@@ -16,13 +16,13 @@ internal static class CatalogueRecordChecks
             if (r is null) throw new ArgumentException("a catalogue record is null", nameof(records));
             if (string.IsNullOrEmpty(r.Id) || string.IsNullOrEmpty(r.ClassId)) throw new ArgumentException("a catalogue record has no id or class", nameof(records));
             if (r.ClassId.Contains('/')) throw new ArgumentException($"class id '{r.ClassId}' contains '/'", nameof(records));
-            if (!ids.Add((r.ClassId, r.Id))) throw new ArgumentException($"{r.ClassId} entry {r.Id} appears twice", nameof(records));
+            if (!ids.Add((r.ClassId, r.Id))) throw new ArgumentException($"{r.ClassId} source {r.Id} appears twice", nameof(records));
             int width = r.ParameterNames.Length;
             if (r.Median.Length != width || r.Lower.Length != width || r.Upper.Length != width || (width == 0 ? r.Samples.Length != 0 : r.Samples.Length % width != 0))
-                throw new ArgumentException($"{r.ClassId} entry {r.Id}: summaries or samples do not match its {width} parameters", nameof(records));
+                throw new ArgumentException($"{r.ClassId} source {r.Id}: summaries or samples do not match its {width} parameters", nameof(records));
             string[] columns = [.. r.ParameterNames];
             if (!columnsOfClass.TryAdd(r.ClassId, columns) && !columnsOfClass[r.ClassId].SequenceEqual(columns))
-                throw new ArgumentException($"{r.ClassId} entry {r.Id} has other parameters than the class's earlier entries", nameof(records));
+                throw new ArgumentException($"{r.ClassId} source {r.Id} has other parameters than the class's earlier sources", nameof(records));
         }
     }
 }

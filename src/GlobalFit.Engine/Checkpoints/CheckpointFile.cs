@@ -5,7 +5,7 @@ using MessagePack;
 
 namespace GlobalFit.Engine.Checkpoints;
 
-/// <summary>Writes and reads <c>RUN/checkpoint/</c>: <c>latest.ckpt</c> and the one before it, <c>previous.ckpt</c>.</summary>
+/// <summary>Writes and reads <c>RUN/checkpoints/</c>: <c>latest.ckpt</c> and the one before it, <c>previous.ckpt</c>.</summary>
 /// <remarks>
 /// <para>File layout: 8 bytes magic <c>GFCKPT01</c>, 8 bytes little-endian payload length, 32 bytes SHA-256 of the
 /// payload, then the MessagePack <see cref="RunCheckpoint"/>. A write goes to <c>latest.tmp</c>, is flushed to disk
@@ -19,8 +19,11 @@ public static class CheckpointFile
     private const int HeaderBytes = 8 + 8 + 32;
     private static readonly byte[] Magic = "GFCKPT01"u8.ToArray();
 
+    /// <summary>Name of the checkpoint folder inside a run folder.</summary>
+    public const string FolderName = "checkpoints";
+
     /// <summary>The folder inside a run folder.</summary>
-    public static string Folder(string runFolder) => Path.Combine(runFolder, "checkpoint");
+    public static string Folder(string runFolder) => Path.Combine(runFolder, FolderName);
 
     /// <summary>Path of the newest checkpoint.</summary>
     public static string LatestPath(string runFolder) => Path.Combine(Folder(runFolder), "latest.ckpt");
@@ -38,11 +41,14 @@ public static class CheckpointFile
         {
             WriteTemporary(temporary, checkpoint);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e)
         {
-            // The previous checkpoints stay as they were; a half-written temporary file is not left behind.
+            // The previous checkpoints stay as they were; a half-written temporary file is not left behind. The
+            // serialiser wraps the stream's I/O errors in its own exception; the I/O cause is what the user needs.
             TryDelete(temporary);
-            throw new IOException($"{temporary} cannot be written: {FileProblem.Describe(temporary, e)}", e);
+            if (FileWriteException.IoCause(e) is { } cause)
+                throw new IOException($"{temporary} cannot be written: {FileProblem.Describe(temporary, cause)}", e);
+            throw;
         }
         string latest = LatestPath(runFolder);
         if (File.Exists(latest)) File.Move(latest, PreviousPath(runFolder), overwrite: true);
@@ -63,7 +69,7 @@ public static class CheckpointFile
 
     private static void WriteTemporary(string temporary, RunCheckpoint checkpoint)
     {
-        using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
+        using (var stream = WriteStreams.Open(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
         {
             // The payload is serialised straight to the file behind a placeholder header, which is filled in once its
             // length and digest are known: a checkpoint of thousands of workers is never held whole in memory.
@@ -82,7 +88,7 @@ public static class CheckpointFile
             digest.CopyTo(header[16..]);
             stream.Position = 0;
             stream.Write(header);
-            stream.Flush(flushToDisk: true);
+            WriteStreams.FlushToDisk(stream);
         }
     }
 

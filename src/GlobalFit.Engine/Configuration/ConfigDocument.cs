@@ -14,23 +14,7 @@ public static class ConfigDocument
     /// <exception cref="InvalidInputException">The file is missing, unreadable or not valid TOML.</exception>
     public static ConfigTable Load(string path)
     {
-        string text;
-        try
-        {
-            text = File.ReadAllText(path);
-        }
-        catch (FileNotFoundException)
-        {
-            throw new InvalidInputException(path, null, "file not found");
-        }
-        catch (DirectoryNotFoundException)
-        {
-            throw new InvalidInputException(path, null, "file not found (its folder does not exist)");
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new InvalidInputException(path, null, $"cannot read the file: {e.Message}", e);
-        }
+        string text = TextFile.ReadUtf8(path);
         return Parse(text, path);
     }
 

@@ -115,6 +115,23 @@ public sealed class ConfigTable
         return entry.Value is string s ? s : throw WrongType(key, entry, "a string");
     }
 
+    /// <summary>A file or folder path, made absolute against <paramref name="baseFolder"/>; <paramref name="fallback"/> when
+    /// absent. Refused (naming the key) when empty or when it holds a character no path may hold.</summary>
+    public string GetPath(string key, string fallback, string baseFolder)
+    {
+        string v = GetString(key, fallback);
+        if (string.IsNullOrWhiteSpace(v)) throw Invalid(key, "must name a file or folder, got an empty string");
+        if (v.Any(char.IsControl)) throw Invalid(key, "holds a control character (such as NUL or a line break), which no path may hold");
+        try
+        {
+            return System.IO.Path.GetFullPath(v, baseFolder);
+        }
+        catch (Exception e) when (e is ArgumentException or PathTooLongException or NotSupportedException)
+        {
+            throw Invalid(key, $"is not a usable path ({e.Message})");
+        }
+    }
+
     /// <summary>A string that must be one of <paramref name="allowed"/>, or <paramref name="fallback"/> when absent.</summary>
     public string GetChoice(string key, string fallback, params string[] allowed)
     {

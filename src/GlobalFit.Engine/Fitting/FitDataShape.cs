@@ -8,6 +8,10 @@ namespace GlobalFit.Engine.Fitting;
 /// <param name="StartS">Time of the first sample.</param>
 public sealed record FitDataShape(string SourceName, int SampleCount, double CadenceS, double StartS)
 {
+    /// <summary>The foreground fit (years) of the scenario the observation file records it was simulated with, or null
+    /// when the file records no scenario or one without a foreground. The noise model's default.</summary>
+    public double? ScenarioForegroundFitYears { get; init; }
+
     /// <summary>Record length N Δt.</summary>
     public double DurationS => SampleCount * CadenceS;
 

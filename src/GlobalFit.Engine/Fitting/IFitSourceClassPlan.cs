@@ -31,6 +31,15 @@ public interface IFitSourceClassPlan
     /// <param name="minimumConfidence">Entries present in fewer samples than this fraction are left out.</param>
     IClassCatalogue CreateCatalogue(IPsdSource noise, long burnInIterations, double minimumConfidence);
 
+    /// <summary>The matcher <c>globalfit compare</c> uses for this class's sources, weighting by <paramref name="noise"/>,
+    /// or null when the class has no sources to compare (the noise model).</summary>
+    /// <param name="noise">The noise model to weight overlaps with (the fit's final one).</param>
+    ISourceMatcher? CreateMatcher(IPsdSource noise) => null;
+
+    /// <summary>Facts about the plan a user should see when the fit starts (one line each), e.g. which model of the
+    /// noise it uses and why.</summary>
+    IEnumerable<string> Describe() => [];
+
     /// <summary>Writes the resolved section (every key, defaults included) for <c>RUN/run.toml</c>.</summary>
     /// <param name="writer">The writer, positioned at this class's section.</param>
     void WriteResolved(ResolvedConfigWriter writer);

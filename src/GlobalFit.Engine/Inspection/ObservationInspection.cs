@@ -54,9 +54,14 @@ public sealed record ObservationInspection(
         if (observation.Provenance.Entries.TryGetValue(ObservationSimulator.ScenarioProvenanceKey, out var toml))
         {
             var scenario = SourceClassRegistry.Default.ReadScenario(ConfigDocument.Parse(toml, $"{path} (provenance {ObservationSimulator.ScenarioProvenanceKey})"));
-            return (scenario.Noise.Model(), $"noise model of the file's scenario \"{scenario.Name}\"");
+            string foreground = scenario.Noise.Foreground is { } f
+                ? string.Create(System.Globalization.CultureInfo.InvariantCulture, $"foreground of the {f.ObservationYears}-year fit, amplitude {f.AmplitudeScale}; a fit of this file uses this foreground fit unless its [noise.foreground] sets fit_years")
+                : "no foreground";
+            return (scenario.Noise.Model(), $"noise model of the file's scenario \"{scenario.Name}\" ({foreground})");
         }
-        return (new AetNoiseModel(InstrumentNoiseSettings.Default), "default instrument noise (the file records no scenario)");
+        var nearest = SourceClasses.Noise.NoiseFitSettings.NearestFitYears(observation.Data.Count * observation.Data.DtSeconds);
+        return (new AetNoiseModel(InstrumentNoiseSettings.Default), string.Create(System.Globalization.CultureInfo.InvariantCulture,
+            $"default instrument noise (the file records no scenario; a fit of it takes the {nearest}-year foreground fit, the one nearest its length, unless its [noise.foreground] sets fit_years)"));
     }
 
     private static InjectedClassSummary Summarise(TruthTable table)

@@ -9,4 +9,7 @@ public interface IFitProgress
 
     /// <summary>Something the user should know (a worker restarted, a checkpoint failed, a damaged checkpoint skipped).</summary>
     void Warning(string message);
+
+    /// <summary>A fact about the run worth stating once at its start (e.g. which foreground model the noise uses).</summary>
+    void Note(string message) { }
 }

@@ -12,4 +12,8 @@ public sealed record FitRunOptions(IFitProgress Progress, Uri? OtlpEndpoint, Can
     /// <summary>The modules the run's configuration may use (<see cref="SourceClassRegistry.Default"/> unless a test
     /// or an embedding program adds its own).</summary>
     public SourceClassRegistry Registry { get; init; } = SourceClassRegistry.Default;
+
+    /// <summary>Resume with a data file other than the one the run was fitted to (<c>--accept-new-data</c>); without it
+    /// such a resume is refused.</summary>
+    public bool AcceptNewData { get; init; }
 }

@@ -16,7 +16,7 @@ namespace GlobalFit.Engine.Runs;
 
 /// <summary>Starts and resumes fits: prepares the run folder, loads the data, builds the actors, runs the coordinator
 /// to the end (or until cancelled) and writes the catalogue.</summary>
-public static class FitRunner
+public static partial class FitRunner
 {
     /// <summary>Starts a fresh fit from a run configuration.</summary>
     /// <param name="configPath">The configuration file.</param>
@@ -32,12 +32,14 @@ public static class FitRunner
         // Everything that can be wrong with the data is found before the run folder is touched, so a refused fit leaves
         // nothing behind that would block a retry.
         var data = LoadData(plan, options.Progress);
+        var identity = DataIdentity.Of(plan.Settings.DataPath);
         bool unstarted = layout.HoldsUnstartedRun();
         Directory.CreateDirectory(layout.Root);
         using var runLock = RunLock.Acquire(layout);
         if (unstarted) layout.ClearUnstartedRun();
         string resolved = plan.ResolvedToml();
         AtomicFile.Write(layout.ResolvedConfig, overwrite: false, s => s.Write(Encoding.UTF8.GetBytes(resolved)));
+        identity.Write(layout);
         return Run(plan, layout, Digest(resolved), data, FitPosition.Fresh(plan.Workers), options);
     }
 
@@ -56,13 +58,27 @@ public static class FitRunner
     /// <summary>Continues a stopped fit from its newest intact checkpoint (or from the start when it never wrote one).</summary>
     /// <param name="runFolder">The run folder.</param>
     /// <param name="options">Progress, telemetry endpoint and cancellation.</param>
-    /// <exception cref="InvalidInputException">The folder is not a run, is running, or its checkpoints are unusable.</exception>
-    public static FitOutcome Resume(string runFolder, FitRunOptions options)
+    /// <param name="iterations">A new total of iterations (extends a finished or stopped run; at least the iterations
+    /// already checkpointed), or null to keep the run's. Written into <c>run.toml</c> before the run continues.</param>
+    /// <exception cref="InvalidInputException">The folder is not a run, is running, or its checkpoints are unusable, or
+    /// <paramref name="iterations"/> lies below the checkpointed iteration.</exception>
+    public static FitOutcome Resume(string runFolder, FitRunOptions options, long? iterations = null)
     {
         ArgumentNullException.ThrowIfNull(options);
         var layout = RunFolderLayout.OpenExisting(runFolder);
         using var runLock = RunLock.Acquire(layout);
         string resolved = File.ReadAllText(layout.ResolvedConfig);
+        // Checked before anything in the folder changes (run.toml included): a refused resume leaves the run as it was.
+        var identity = DataIdentity.Verify(layout, RunPlan.Load(layout.ResolvedConfig, options.Registry).Settings.DataPath, options.AcceptNewData, options.Progress.Warning);
+        if (iterations is { } total)
+        {
+            long done = CheckpointFile.Exists(layout.Root) ? CheckpointFile.Read(layout.Root, options.Progress.Warning).Iteration : 0;
+            if (total < Math.Max(1, done))
+                throw new InvalidInputException("--iterations", null, $"must be at least the {Math.Max(1, done)} iterations already checkpointed, got {total}");
+            resolved = WithIterations(resolved, total, layout.ResolvedConfig);
+            RunPlan.FromConfig(Configuration.ConfigDocument.Parse(resolved, layout.ResolvedConfig), layout.Root, options.Registry); // checks the new total before anything is written
+            AtomicFile.Write(layout.ResolvedConfig, overwrite: true, stream => stream.Write(Encoding.UTF8.GetBytes(resolved)));
+        }
         var plan = RunPlan.Load(layout.ResolvedConfig, options.Registry);
         if (plan.Settings.RunFolder != layout.Root)
             throw new InvalidInputException(layout.ResolvedConfig, "key 'run_folder'", $"names {plan.Settings.RunFolder}, but the run is in {layout.Root}; a moved run folder must have run_folder updated");
@@ -76,15 +92,16 @@ public static class FitRunner
             // out of the catalogue without a word.
             long committed = store.CommittedIteration;
             if (committed < start.Iteration)
-                throw new InvalidInputException(store.ChainsFolder, null,
+                throw new InvalidInputException(store.SamplesFolder, null,
                     $"holds the samples of iterations 1…{committed} only, but the checkpoint is at iteration {start.Iteration}: the samples of iterations {committed + 1}…{start.Iteration} are lost");
         }
         else
         {
             start = FitPosition.Fresh(plan.Workers);
         }
-        store.TruncateAfter(start.Iteration);
         var data = LoadData(plan, options.Progress);
+        store.TruncateAfter(start.Iteration);
+        identity.Write(layout);
         return Run(plan, layout, digest, data, start, options);
     }
 
@@ -109,12 +126,18 @@ public static class FitRunner
         var store = system.ActorOf(SampleStoreActor.Props(new SampleStore(layout.Root)), "sample-store");
         var checkpointer = system.ActorOf(CheckpointerActor.Props(layout.Root), "checkpointer");
         var setup = new CoordinatorSetup(plan.StagePlan(digest), start, plan.Workers.ToDictionary(w => w.Id, w => w.Label, StringComparer.Ordinal),
-            settings.Threads, residual, store, checkpointer, progress, LoadOnce);
+            settings.Threads, residual, store, checkpointer, progress, LoadOnce)
+        {
+            RecordFailure = new WorkerFailureLog(layout.WorkerFailureLog).Record,
+        };
         var coordinator = system.ActorOf(FitCoordinator.Props(setup), "fit-coordinator");
         using var stop = options.Cancellation.Register(() => coordinator.Tell(new StopFit()));
         var finished = coordinator.Ask<FitFinished>(new StartFit(), Timeout.InfiniteTimeSpan).GetAwaiter().GetResult();
         system.Terminate().Wait(TimeSpan.FromSeconds(10));
         var outcome = finished.Outcome;
+        telemetry.Flush();
+        if (telemetry.WriteFailure is { } lost)
+            options.Progress.Warning($"telemetry could not be written ({lost}); the fit's samples and checkpoints are complete, but 'trace' lacks the spans from then on");
         progress.WriteState(outcome.Kind.StateName(), outcome.IterationsCompleted, settings.Iterations, outcome.Message, outcome.CheckpointIteration);
         return outcome.Kind == FitOutcomeKind.Completed
             ? outcome with { Catalogue = RunCatalogue.Export(plan, layout, options.Progress.Warning) }
@@ -123,6 +146,7 @@ public static class FitRunner
 
     private static FitData LoadData(RunPlan plan, IFitProgress progress)
     {
+        foreach (string note in plan.Classes.SelectMany(c => c.Describe())) progress.Note(note);
         var observation = ObservationFile.Read(plan.Settings.DataPath);
         var data = FitData.FromObservation(observation, plan.Settings.DataPath);
         if (data.GapSeconds > 0)
@@ -130,6 +154,22 @@ public static class FitRunner
         return data;
     }
 
-    /// <summary>SHA-256 of the resolved configuration text, hex.</summary>
-    internal static string Digest(string resolvedToml) => Convert.ToHexString(SHA256.HashData(Encoding.UTF8.GetBytes(resolvedToml)));
+    /// <summary>SHA-256 of the resolved configuration text without its top-level <c>iterations</c> line, hex.</summary>
+    /// <remarks>The total of iterations only says when to stop, so <c>resume --iterations</c> may change it under a
+    /// checkpoint; every other setting decides what the iterations compute, and editing it refuses the checkpoint.</remarks>
+    internal static string Digest(string resolvedToml) =>
+        Convert.ToHexString(SHA256.HashData(Encoding.UTF8.GetBytes(IterationsLine().Replace(resolvedToml, "", 1))));
+
+    // The top-level `iterations = N` line of a resolved configuration replaced by the new total.
+    private static string WithIterations(string resolvedToml, long total, string path)
+    {
+        var match = IterationsLine().Match(resolvedToml);
+        int firstSection = resolvedToml.IndexOf("\n[", StringComparison.Ordinal);
+        if (!match.Success || (firstSection >= 0 && match.Index > firstSection))
+            throw new InvalidInputException(path, "key 'iterations'", "missing from the resolved configuration; restore run.toml");
+        return resolvedToml[..match.Index] + $"iterations = {total.ToString(System.Globalization.CultureInfo.InvariantCulture)}\n" + resolvedToml[(match.Index + match.Length)..];
+    }
+
+    [System.Text.RegularExpressions.GeneratedRegex(@"^iterations = [^\n]*\n", System.Text.RegularExpressions.RegexOptions.Multiline)]
+    private static partial System.Text.RegularExpressions.Regex IterationsLine();
 }

@@ -7,7 +7,7 @@ using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Runs;
 
-/// <summary>Builds a run's catalogue from its catalogue store: every class's entries from the samples after burn-in,
+/// <summary>Builds a run's catalogue from its catalogue store: every class's sources from the samples after burn-in,
 /// with SNRs and overlaps weighted by the noise model of the newest checkpoint.</summary>
 public static class RunCatalogue
 {
@@ -15,13 +15,17 @@ public static class RunCatalogue
     /// <param name="plan">The run's plan (from its run.toml).</param>
     /// <param name="layout">The run folder.</param>
     /// <param name="warn">Receives a message when the newest checkpoint is damaged and the previous one is used.</param>
-    /// <returns>The entries of every class, class by class in registration order.</returns>
-    public static ImmutableArray<CatalogueRecord> Build(RunPlan plan, RunFolderLayout layout, Action<string> warn)
+    /// <param name="burnIn">Iterations whose samples are left out, instead of the run's <c>burn_in</c>.</param>
+    /// <param name="minConfidence">Sources present in fewer samples are left out, instead of the run's <c>min_confidence</c>.</param>
+    /// <returns>The rows of every class (the noise posterior's among them), class by class in registration order.</returns>
+    public static ImmutableArray<CatalogueRecord> Build(RunPlan plan, RunFolderLayout layout, Action<string> warn, long? burnIn = null, double? minConfidence = null)
     {
         ArgumentNullException.ThrowIfNull(plan);
         ArgumentNullException.ThrowIfNull(layout);
         var noise = FinalNoise(plan, layout, warn);
-        var catalogues = plan.Classes.ToDictionary(c => c.ClassId, c => c.CreateCatalogue(noise, plan.Settings.BurnIn, plan.Settings.MinConfidence), StringComparer.Ordinal);
+        long burn = burnIn ?? plan.Settings.BurnIn;
+        double confidence = minConfidence ?? plan.Settings.MinConfidence;
+        var catalogues = plan.Classes.ToDictionary(c => c.ClassId, c => c.CreateCatalogue(noise, burn, confidence), StringComparer.Ordinal);
         foreach (var block in new SampleStore(layout.Root).ReadAll())
             if (catalogues.TryGetValue(block.ClassId, out var catalogue)) catalogue.Add(block);
         return [.. plan.Classes.SelectMany(c => catalogues[c.ClassId].Build())];
@@ -36,8 +40,12 @@ public static class RunCatalogue
         return records;
     }
 
-    // The noise model of the newest checkpoint: its noise worker restored (or fresh when it never ran).
-    private static IPsdSource FinalNoise(RunPlan plan, RunFolderLayout layout, Action<string> warn)
+    /// <summary>The noise model of the newest checkpoint: its noise worker restored (or fresh when it never ran).</summary>
+    /// <param name="plan">The run's plan.</param>
+    /// <param name="layout">The run folder.</param>
+    /// <param name="warn">Receives a message when the newest checkpoint is damaged and the previous one is used.</param>
+    /// <exception cref="InvalidInputException">The run has no checkpoint yet.</exception>
+    public static IPsdSource FinalNoise(RunPlan plan, RunFolderLayout layout, Action<string> warn)
     {
         if (!CheckpointFile.Exists(layout.Root))
             throw new InvalidInputException(layout.Root, null, "the run has no checkpoint yet, so there is no noise model to build the catalogue with");

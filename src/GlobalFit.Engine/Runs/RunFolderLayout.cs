@@ -24,9 +24,9 @@ public sealed record RunFolderLayout(string Root)
     /// <summary>Removes the files a fit that never completed an iteration leaves (and nothing else).</summary>
     public void ClearUnstartedRun()
     {
-        foreach (string file in new[] { ResolvedConfig, StatusFile, TelemetryFile })
+        foreach (string file in new[] { ResolvedConfig, StatusFile, TelemetryFile, DataIdentityFile, WorkerFailureLog })
             if (File.Exists(file)) File.Delete(file);
-        foreach (string folder in new[] { Path.Combine(Root, Samples.SampleStore.ChainsFolderName), Checkpoints.CheckpointFile.Folder(Root) })
+        foreach (string folder in new[] { Path.Combine(Root, Samples.SampleStore.SamplesFolderName), Checkpoints.CheckpointFile.Folder(Root) })
             if (Directory.Exists(folder)) Directory.Delete(folder, recursive: true);
     }
 
@@ -38,6 +38,12 @@ public sealed record RunFolderLayout(string Root)
 
     /// <summary>Where the run stands, rewritten every iteration.</summary>
     public string StatusFile => Path.Combine(Root, "status.json");
+
+    /// <summary>Size and SHA-256 of the observation file the run is fitted to (<see cref="DataIdentity"/>).</summary>
+    public string DataIdentityFile => Path.Combine(Root, DataIdentity.FileName);
+
+    /// <summary>Every worker failure with its stack trace (<see cref="Runs.WorkerFailureLog"/>).</summary>
+    public string WorkerFailureLog => Path.Combine(Root, "worker-failures.log");
 
     /// <summary>Spans and metrics.</summary>
     public string TelemetryFile => Path.Combine(Root, Telemetry.TelemetryJsonLines.FileName);

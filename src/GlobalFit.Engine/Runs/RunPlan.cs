@@ -1,6 +1,7 @@
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Fitting;
 using GlobalFit.Engine.Orchestration;
+using GlobalFit.Engine.Simulation;
 using GlobalFit.Engine.SourceClasses;
 using GlobalFit.Physics.DataFiles;
 using GlobalFit.Physics.Files;
@@ -120,7 +121,20 @@ public sealed class RunPlan
     private static FitDataShape ReadShape(string dataPath)
     {
         var summary = ObservationFile.ReadSummary(dataPath);
-        return new FitDataShape(dataPath, summary.SampleCount, summary.DtSeconds, summary.T0Seconds);
+        return new FitDataShape(dataPath, summary.SampleCount, summary.DtSeconds, summary.T0Seconds)
+        {
+            ScenarioForegroundFitYears = RecordedForegroundFitYears(summary.Provenance, dataPath),
+        };
+    }
+
+    // The [noise.foreground] of the scenario recorded in the file's provenance; null when there is none or it is off.
+    private static double? RecordedForegroundFitYears(ObservationProvenance provenance, string dataPath)
+    {
+        if (!provenance.Entries.TryGetValue(ObservationSimulator.ScenarioProvenanceKey, out var toml)) return null;
+        var foreground = ConfigDocument.Parse(toml, $"{dataPath} (provenance {ObservationSimulator.ScenarioProvenanceKey})")
+            .GetTable("noise")?.GetTable("foreground");
+        if (foreground is null || !foreground.GetBool("enabled", true)) return null;
+        return foreground.GetDouble("fit_years", 1.0);
     }
 
     private static ConfigTable EmptyTable(ConfigTable root, string name) => ConfigDocument.Parse($"[{name}]\n", root.SourceName).GetTable(name)!;

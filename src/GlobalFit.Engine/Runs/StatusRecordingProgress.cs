@@ -19,12 +19,15 @@ internal sealed class StatusRecordingProgress(IFitProgress inner, RunFolderLayou
 
     public void Warning(string message) => inner.Warning(message);
 
+    public void Note(string message) => inner.Note(message);
+
     public void WriteState(string state, long iteration, long total, string message, long? checkpointIteration = null)
     {
         if (checkpointIteration is { } c) _checkpointIteration = c;
         new RunStatus
         {
             State = state,
+            Run = layout.Root,
             ProcessId = Environment.ProcessId,
             Iteration = iteration,
             TotalIterations = total,
@@ -32,7 +35,8 @@ internal sealed class StatusRecordingProgress(IFitProgress inner, RunFolderLayou
             UpdatedUtc = DateTimeOffset.UtcNow,
             LastIterationSeconds = _last?.WallTime.TotalSeconds ?? 0,
             SourcesPerClass = _last?.SourcesPerClass ?? ImmutableSortedDictionary<string, int>.Empty,
-            SlowestWorkers = _last is null ? [] : [.. _last.SlowestWorkers.Select(s => new SlowWorker(s.WorkerId, Math.Round(s.ComputeMs, 1)))],
+            SlowestWorkers = _last is null ? [] : [.. _last.SlowestWorkers.Select(s => new SlowWorker(s.WorkerId, Math.Round(s.ComputeMs, 1)))
+                .OrderByDescending(s => s.ComputeMs).ThenBy(s => s.WorkerId, StringComparer.Ordinal)],
             Message = message,
         }.Write(layout);
     }

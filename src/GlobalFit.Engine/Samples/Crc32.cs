@@ -2,7 +2,7 @@ namespace GlobalFit.Engine.Samples;
 
 /// <summary>The CRC-32 of ISO-HDLC (zlib, PNG, Ethernet): reflected polynomial 0xEDB88320, initial value and final
 /// XOR 0xFFFFFFFF. Check value of the ASCII bytes "123456789": 0xCBF43926.</summary>
-/// <remarks>Implemented here rather than taken from a package because one table-driven loop is all the chain files
+/// <remarks>Implemented here rather than taken from a package because one table-driven loop is all the sample files
 /// need, and the polynomial is fixed by the file format (Catalogue/LAYOUT.md), not by a library's choice.</remarks>
 public static class Crc32
 {

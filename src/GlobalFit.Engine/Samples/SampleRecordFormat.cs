@@ -4,7 +4,7 @@ using MessagePack;
 
 namespace GlobalFit.Engine.Samples;
 
-/// <summary>The framing of one record of a chain file (Catalogue/LAYOUT.md): a 12-byte header — the magic bytes
+/// <summary>The framing of one record of a sample file (Catalogue/LAYOUT.md): a 12-byte header — the magic bytes
 /// <c>GFSB</c>, the payload length and the CRC-32 of the payload, both unsigned 32-bit little-endian — then the payload,
 /// a MessagePack <see cref="SampleBlock"/>.</summary>
 /// <remarks>The magic makes a misplaced offset fail loudly instead of decoding garbage; the CRC catches flipped bits and

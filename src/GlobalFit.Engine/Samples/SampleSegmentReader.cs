@@ -6,7 +6,7 @@ using MessagePack;
 
 namespace GlobalFit.Engine.Samples;
 
-/// <summary>Reads and verifies the committed records of one chain file.</summary>
+/// <summary>Reads and verifies the committed records of one sample file.</summary>
 /// <remarks>Everything up to the committed length must be whole, checksummed records of this worker in increasing
 /// iteration order; anything else there is damage (a flipped bit, a truncated file, a foreign file) and is reported with
 /// the file and the byte offset of the record, because silently skipping it would change the catalogue.</remarks>

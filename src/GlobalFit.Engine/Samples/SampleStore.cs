@@ -3,7 +3,7 @@ using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Samples;
 
-/// <summary>The append-only sample store of a run: one checksummed chain file per worker in <c>RUN/chains/</c>, plus a
+/// <summary>The append-only sample store of a run: one checksummed sample file per worker in <c>RUN/samples/</c>, plus a
 /// commit point naming the last iteration whose samples are all on disk (layout in Catalogue/LAYOUT.md).</summary>
 /// <remarks>
 /// <para>An iteration is committed in two steps: its records are appended to the workers' files and flushed to disk,
@@ -15,8 +15,8 @@ namespace GlobalFit.Engine.Samples;
 /// </remarks>
 public sealed class SampleStore
 {
-    /// <summary>Name of the folder inside the run folder that holds the chain files.</summary>
-    public const string ChainsFolderName = "chains";
+    /// <summary>Name of the folder inside the run folder that holds the sample files.</summary>
+    public const string SamplesFolderName = "samples";
 
     /// <summary>Opens the store of <paramref name="runFolder"/>; nothing is created until the first append.</summary>
     /// <param name="runFolder">The run folder.</param>
@@ -24,17 +24,17 @@ public sealed class SampleStore
     {
         ArgumentException.ThrowIfNullOrEmpty(runFolder);
         RunFolder = runFolder;
-        ChainsFolder = Path.Combine(runFolder, ChainsFolderName);
+        SamplesFolder = Path.Combine(runFolder, SamplesFolderName);
     }
 
     /// <summary>The run folder.</summary>
     public string RunFolder { get; }
 
-    /// <summary>The folder holding the chain files.</summary>
-    public string ChainsFolder { get; }
+    /// <summary>The folder holding the sample files.</summary>
+    public string SamplesFolder { get; }
 
     /// <summary>The last committed iteration (0 when nothing was committed).</summary>
-    public long CommittedIteration => CommitManifest.Load(ChainsFolder).Iteration;
+    public long CommittedIteration => CommitManifest.Load(SamplesFolder).Iteration;
 
     /// <summary>Appends all the blocks of one iteration and commits the iteration: when this returns, the samples are on
     /// disk.</summary>
@@ -42,29 +42,29 @@ public sealed class SampleStore
     /// <see cref="CommittedIteration"/>. An empty list does nothing.</param>
     /// <exception cref="ArgumentException">The blocks are of different iterations, of an iteration already committed, repeat a
     /// worker, or are inconsistent (value count not matching the sources and parameters).</exception>
-    /// <exception cref="InvalidInputException">The run folder is missing or a chain file is shorter than its commit point.</exception>
+    /// <exception cref="InvalidInputException">The run folder is missing or a sample file is shorter than its commit point.</exception>
     public void Append(IReadOnlyList<SampleBlock> blocks)
     {
         ArgumentNullException.ThrowIfNull(blocks);
         if (blocks.Count == 0) return;
         if (!Directory.Exists(RunFolder)) throw new InvalidInputException(RunFolder, null, "run folder does not exist");
-        var manifest = CommitManifest.Load(ChainsFolder);
+        var manifest = CommitManifest.Load(SamplesFolder);
         long iteration = CheckIteration(blocks, manifest.Iteration);
-        if (!Directory.Exists(ChainsFolder))
+        if (!Directory.Exists(SamplesFolder))
         {
             // The commit record exists before any sample file does, so a record missing beside sample files is a loss
             // (reported by every reader), never the state of a store that has not committed yet.
-            Directory.CreateDirectory(ChainsFolder);
-            CommitManifest.Empty.Save(ChainsFolder);
+            Directory.CreateDirectory(SamplesFolder);
+            CommitManifest.Empty.Save(SamplesFolder);
         }
 
         var lengths = new Dictionary<string, long>(manifest.Lengths, StringComparer.Ordinal);
         foreach (var block in blocks.OrderBy(b => b.WorkerId, StringComparer.Ordinal))
         {
             string fileName = WorkerFileName.FromWorkerId(block.WorkerId);
-            lengths[fileName] = AppendRecord(Path.Combine(ChainsFolder, fileName), manifest.LengthOf(fileName), SampleRecordFormat.Encode(block));
+            lengths[fileName] = AppendRecord(Path.Combine(SamplesFolder, fileName), manifest.LengthOf(fileName), SampleRecordFormat.Encode(block));
         }
-        new CommitManifest(iteration, lengths).Save(ChainsFolder);
+        new CommitManifest(iteration, lengths).Save(SamplesFolder);
     }
 
     /// <summary>Prepares a resume from the state of <paramref name="iteration"/>: removes every record of a later iteration
@@ -75,8 +75,8 @@ public sealed class SampleStore
     public IReadOnlyList<SegmentTruncation> TruncateAfter(long iteration)
     {
         ArgumentOutOfRangeException.ThrowIfNegative(iteration);
-        if (!Directory.Exists(ChainsFolder)) return [];
-        var manifest = CommitManifest.Load(ChainsFolder);
+        if (!Directory.Exists(SamplesFolder)) return [];
+        var manifest = CommitManifest.Load(SamplesFolder);
         long keep = Math.Min(iteration, manifest.Iteration);
         var cuts = new List<(string Path, long Length)>();
         var dropped = new List<SegmentTruncation>();
@@ -84,10 +84,10 @@ public sealed class SampleStore
         var files = ChainFiles().ToList();
         foreach (var (fileName, committedLength) in manifest.Lengths)
             if (committedLength > 0 && !files.Any(f => f.FileName == fileName))
-                throw new InvalidInputException(Path.Combine(ChainsFolder, fileName), null, $"is missing but {committedLength} bytes of it were committed");
+                throw new InvalidInputException(Path.Combine(SamplesFolder, fileName), null, $"is missing but {committedLength} bytes of it were committed");
         foreach (var (workerId, fileName) in files)
         {
-            string path = Path.Combine(ChainsFolder, fileName);
+            string path = Path.Combine(SamplesFolder, fileName);
             long committed = manifest.LengthOf(fileName);
             long cut = 0;
             int recordsDropped = 0;
@@ -108,7 +108,7 @@ public sealed class SampleStore
             dropped.Add(new SegmentTruncation(workerId, recordsDropped, firstDropped, fileLength - committed));
         }
         // The commit point moves back first: a crash before the files are cut leaves only uncommitted bytes.
-        new CommitManifest(keep, lengths).Save(ChainsFolder);
+        new CommitManifest(keep, lengths).Save(SamplesFolder);
         foreach (var (path, length) in cuts) CutFile(path, length);
         return dropped;
     }
@@ -121,7 +121,7 @@ public sealed class SampleStore
     public IEnumerable<SampleBlock> Read(string workerId)
     {
         ArgumentException.ThrowIfNullOrEmpty(workerId);
-        return ReadWorker(workerId, WorkerFileName.FromWorkerId(workerId), CommitManifest.Load(ChainsFolder));
+        return ReadWorker(workerId, WorkerFileName.FromWorkerId(workerId), CommitManifest.Load(SamplesFolder));
     }
 
     /// <summary>Every committed block of every worker, ordered by iteration, then worker id (ordinal), each verified.</summary>
@@ -130,8 +130,8 @@ public sealed class SampleStore
     /// enumerating.</exception>
     public IEnumerable<SampleBlock> ReadAll()
     {
-        if (!Directory.Exists(ChainsFolder)) yield break;
-        var manifest = CommitManifest.Load(ChainsFolder);
+        if (!Directory.Exists(SamplesFolder)) yield break;
+        var manifest = CommitManifest.Load(SamplesFolder);
         var cursors = new List<IEnumerator<SampleBlock>>();
         var queue = new PriorityQueue<IEnumerator<SampleBlock>, (long Iteration, string WorkerId)>(IterationThenWorker.Instance);
         try
@@ -160,8 +160,8 @@ public sealed class SampleStore
     public IReadOnlyDictionary<string, long> CountSamples()
     {
         var counts = new SortedDictionary<string, long>(StringComparer.Ordinal);
-        if (!Directory.Exists(ChainsFolder)) return counts;
-        var manifest = CommitManifest.Load(ChainsFolder);
+        if (!Directory.Exists(SamplesFolder)) return counts;
+        var manifest = CommitManifest.Load(SamplesFolder);
         foreach (var (workerId, fileName) in ChainFiles())
         {
             long count = 0;
@@ -173,7 +173,7 @@ public sealed class SampleStore
 
     private IEnumerable<SampleBlock> ReadWorker(string workerId, string fileName, CommitManifest manifest)
     {
-        string path = Path.Combine(ChainsFolder, fileName);
+        string path = Path.Combine(SamplesFolder, fileName);
         long committed = manifest.LengthOf(fileName);
         if (!File.Exists(path))
         {
@@ -185,13 +185,13 @@ public sealed class SampleStore
 
     private IEnumerable<(string WorkerId, string FileName)> ChainFiles()
     {
-        if (!Directory.Exists(ChainsFolder)) return [];
+        if (!Directory.Exists(SamplesFolder)) return [];
         var files = new List<(string, string)>();
-        foreach (string path in Directory.EnumerateFiles(ChainsFolder, "*" + WorkerFileName.Extension))
+        foreach (string path in Directory.EnumerateFiles(SamplesFolder, "*" + WorkerFileName.Extension))
         {
             string fileName = Path.GetFileName(path);
             string workerId = WorkerFileName.ToWorkerId(fileName)
-                ?? throw new InvalidInputException(path, null, "is not a chain file name globalfit writes; move it out of the chains folder");
+                ?? throw new InvalidInputException(path, null, "is not a sample file name globalfit writes; move it out of the samples folder");
             files.Add((workerId, fileName));
         }
         return files.OrderBy(f => f.Item1, StringComparer.Ordinal);
@@ -233,14 +233,14 @@ public sealed class SampleStore
     {
         try
         {
-            using var stream = new FileStream(path, FileMode.OpenOrCreate, FileAccess.Write, FileShare.Read);
+            using var stream = WriteStreams.Open(path, FileMode.OpenOrCreate, FileAccess.Write, FileShare.Read);
             if (stream.Length < committedLength)
                 throw new InvalidInputException(path, null, $"holds {stream.Length} bytes but {committedLength} were committed: the file was cut short");
             // Bytes past the commit point are the remains of an append a crash interrupted: never committed, so dropped.
             if (stream.Length > committedLength) stream.SetLength(committedLength);
             stream.Seek(committedLength, SeekOrigin.Begin);
             stream.Write(record);
-            stream.Flush(flushToDisk: true);
+            WriteStreams.FlushToDisk(stream);
             return committedLength + record.Length;
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
@@ -251,9 +251,9 @@ public sealed class SampleStore
 
     private static void CutFile(string path, long length)
     {
-        using var stream = new FileStream(path, FileMode.Open, FileAccess.Write, FileShare.Read);
+        using var stream = WriteStreams.Open(path, FileMode.Open, FileAccess.Write, FileShare.Read);
         stream.SetLength(length);
-        stream.Flush(flushToDisk: true);
+        WriteStreams.FlushToDisk(stream);
     }
 
     private sealed class IterationThenWorker : IComparer<(long Iteration, string WorkerId)>

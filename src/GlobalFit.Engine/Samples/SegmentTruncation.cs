@@ -1,6 +1,6 @@
 namespace GlobalFit.Engine.Samples;
 
-/// <summary>What <see cref="SampleStore.TruncateAfter"/> removed from one worker's chain file.</summary>
+/// <summary>What <see cref="SampleStore.TruncateAfter"/> removed from one worker's sample file.</summary>
 /// <param name="WorkerId">The worker.</param>
 /// <param name="RecordsDropped">Committed records of later iterations that were removed.</param>
 /// <param name="FirstIterationDropped">The earliest iteration among them, or null when none was.</param>

@@ -3,7 +3,7 @@ using System.Text;
 
 namespace GlobalFit.Engine.Samples;
 
-/// <summary>Maps a worker id (<c>class_id/label</c>) to the name of its sample file in <c>RUN/chains/</c>
+/// <summary>Maps a worker id (<c>class_id/label</c>) to the name of its sample file in <c>RUN/samples/</c>
 /// (<c>class_id.label.samples</c>) and back.</summary>
 /// <remarks>Lower-case letters, digits, <c>_</c> and <c>-</c> are kept; <c>/</c> becomes <c>.</c>; every other byte of the
 /// id's UTF-8 form (upper case included, so that ids differing only in case never share a file on a case-insensitive

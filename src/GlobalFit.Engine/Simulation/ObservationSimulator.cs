@@ -19,7 +19,7 @@ public static class ObservationSimulator
     /// <summary>Simulates the scenario.</summary>
     /// <param name="scenario">What to simulate.</param>
     /// <param name="generator">Name and version of the program, recorded in the file.</param>
-    /// <param name="notes">Extra provenance entries (e.g. the command line).</param>
+    /// <param name="notes">Extra provenance notes (e.g. the command line).</param>
     /// <param name="progress">Receives the completed fraction; may be null.</param>
     public static Observation Simulate(SimulationScenario scenario, string generator, IReadOnlyDictionary<string, string> notes, IProgress<double>? progress)
     {
@@ -41,13 +41,13 @@ public static class ObservationSimulator
         var truth = InjectSources(scenario, noise, data);
         progress?.Report(0.9);
 
-        var entries = new Dictionary<string, string>(notes)
+        var allNotes = new Dictionary<string, string>(notes)
         {
             ["scenario_name"] = scenario.Name,
             ["seed"] = scenario.Seed.ToString(CultureInfo.InvariantCulture),
             [ScenarioProvenanceKey] = scenario.ToToml(),
         };
-        var provenance = new ObservationProvenance(generator, DateTimeOffset.UtcNow, entries);
+        var provenance = new ObservationProvenance(generator, DateTimeOffset.UtcNow, allNotes);
         var observation = new Observation(data, GapList.None, truth, provenance);
         progress?.Report(1.0);
         return observation;

@@ -1,6 +1,8 @@
+using System.Globalization;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Physics.Constants;
 using GlobalFit.Physics.Noise;
+using GlobalFit.Physics.Files;
 
 namespace GlobalFit.Engine.Simulation;
 
@@ -79,13 +81,19 @@ public sealed record ObservationSettings(double DurationS, double CadenceS, doub
         double cadence = table.GetPositive("cadence_s", 5.0);
         double start = table.GetDouble("start_s", 0.0);
         if (!double.IsFinite(start)) throw table.Invalid("start_s", "must be finite");
+        // Errors about the length name the key the user wrote.
+        string durationKey = table.Has("duration_days") ? "duration_days" : "duration_s";
         double samples = Math.Floor(duration / cadence);
         if (samples < 16)
-            throw table.Invalid("cadence_s", $"duration {duration} s at cadence {cadence} s gives {samples} samples; at least 16 are needed");
+            throw table.Invalid("cadence_s", $"duration {duration} s at cadence {cadence} s gives {samples} points per channel; at least 16 are needed");
         if (samples > int.MaxValue / 4)
-            throw table.Invalid("duration_s", $"duration {duration} s at cadence {cadence} s gives {samples:E3} samples per channel, more than this build handles ({int.MaxValue / 4})");
+            throw table.Invalid(durationKey, $"duration {duration} s at cadence {cadence} s gives {NumberText.Significant(samples, 4)} points per channel, more than this build handles ({int.MaxValue / 4})");
         if (duration > 20 * PhysicalConstants.JulianYearS)
-            throw table.Invalid(table.Has("duration_days") ? "duration_days" : "duration_s", "durations beyond 20 years are outside the orbit model's intended range");
+            throw table.Invalid(durationKey, "durations beyond 20 years are outside the orbit model's intended range");
+        double needed = SimulationMemory.EstimatedBytes(samples);
+        if (needed > SimulationMemory.AvailableBytes)
+            throw table.Invalid(durationKey, string.Create(CultureInfo.InvariantCulture,
+                $"{NumberText.Significant(samples, 4)} points per channel need about {needed / (1 << 30):F1} GiB to simulate, more than the {SimulationMemory.AvailableBytes / (double)(1 << 30):F1} GiB available; shorten the record or raise cadence_s"));
         table.RejectUnknownKeys(["duration_s", "duration_days", "cadence_s", "start_s"]);
         return new ObservationSettings(duration, cadence, start);
     }

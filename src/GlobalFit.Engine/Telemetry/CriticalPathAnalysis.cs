@@ -39,7 +39,7 @@ public static class CriticalPathAnalysis
         ArgumentNullException.ThrowIfNull(iterations);
         var critical = iterations.SelectMany(i => i.Stages).Where(s => s.CriticalWorkerId is not null)
             .GroupBy(s => s.CriticalWorkerId!, StringComparer.Ordinal)
-            .Select(g => new CriticalWorkerCount(g.Key, g.Count()))
+            .Select(g => new CriticalWorkerCount(g.Key, g.Count(), g.Select(s => s.CriticalWorkerLabel).FirstOrDefault(l => l is not null)))
             .OrderByDescending(c => c.Stages).ThenBy(c => c.WorkerId, StringComparer.Ordinal).ToList();
         if (iterations.Count == 0) return new CriticalPathSummary(0, critical, null, null, null, null);
         var withCompute = iterations.Where(i => i.OverheadFractionOfCompute is not null).ToList();
@@ -107,7 +107,8 @@ public static class CriticalPathAnalysis
                 int index = checked((int)stage.RequireLong(FitTelemetry.StageIndexAttribute, path));
                 var workers = children[(stage.TraceId, stage.SpanId)].Where(s => s.Name == FitTelemetry.WorkerUpdateSpan)
                     .Select(w => (Id: w.RequireText(FitTelemetry.WorkerIdAttribute, path), End: w.EndUtc,
-                                  WallMs: w.OptionalDouble(FitTelemetry.WorkerWallMsAttribute) ?? w.DurationMs))
+                                  WallMs: w.OptionalDouble(FitTelemetry.WorkerWallMsAttribute) ?? w.DurationMs,
+                                  Label: w.OptionalText(FitTelemetry.WorkerLabelAttribute)))
                     .OrderByDescending(w => w.End).ThenBy(w => w.Id, StringComparer.Ordinal).ToList();
                 stages.Add(Stage(index, workers, threads));
                 compute += workers.Sum(w => w.WallMs);
@@ -120,7 +121,7 @@ public static class CriticalPathAnalysis
         return iterations;
     }
 
-    private static StageCriticalPath Stage(int index, List<(string Id, DateTimeOffset End, double WallMs)> byFinishDescending, double threads)
+    private static StageCriticalPath Stage(int index, List<(string Id, DateTimeOffset End, double WallMs, string? Label)> byFinishDescending, double threads)
     {
         if (byFinishDescending.Count == 0) return new StageCriticalPath(index, 0, null, 0, null, 0, null, 0, 0);
         double slowest = byFinishDescending.Max(w => w.WallMs);
@@ -130,7 +131,7 @@ public static class CriticalPathAnalysis
         int others = byFinishDescending.Count - 1;
         return new StageCriticalPath(index, byFinishDescending.Count, last.Id, last.WallMs,
             others == 0 ? null : (last.End - byFinishDescending[1].End).TotalMilliseconds,
-            totalWait, others == 0 ? null : totalWait / others, slowest, least);
+            totalWait, others == 0 ? null : totalWait / others, slowest, least, last.Label);
     }
 
     private static string Line(int number) => string.Create(CultureInfo.InvariantCulture, $"line {number}");

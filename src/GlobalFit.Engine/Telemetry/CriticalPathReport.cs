@@ -11,8 +11,10 @@ namespace GlobalFit.Engine.Telemetry;
 /// <param name="SlowestWallMs">The largest compute time in the stage.</param>
 /// <param name="LeastMs">The least the stage could take: the larger of its slowest worker's compute and its total compute
 /// spread evenly over the compute threads.</param>
+/// <param name="CriticalWorkerLabel">What the last worker covers in words (<c>globalfit.worker.label</c>: a band's
+/// frequency range, a source's id), null when the file does not say.</param>
 public sealed record StageCriticalPath(int StageIndex, int WorkerCount, string? CriticalWorkerId, double CriticalWorkerWallMs,
-    double? LeadMs, double TotalWaitMs, double? MeanWaitMs, double SlowestWallMs, double LeastMs);
+    double? LeadMs, double TotalWaitMs, double? MeanWaitMs, double SlowestWallMs, double LeastMs, string? CriticalWorkerLabel = null);
 
 /// <summary>The critical path of one iteration.</summary>
 /// <param name="Iteration">1-based iteration.</param>
@@ -31,7 +33,8 @@ public sealed record IterationCriticalPath(long Iteration, string TraceId, DateT
 /// <summary>How often a worker was the last of its stage.</summary>
 /// <param name="WorkerId">The worker.</param>
 /// <param name="Stages">Stages (over all iterations analysed) in which it finished last.</param>
-public sealed record CriticalWorkerCount(string WorkerId, int Stages);
+/// <param name="Label">What it covers in words, null when the file does not say.</param>
+public sealed record CriticalWorkerCount(string WorkerId, int Stages, string? Label = null);
 
 /// <summary>Figures over the iterations analysed.</summary>
 /// <param name="IterationCount">Iterations analysed.</param>

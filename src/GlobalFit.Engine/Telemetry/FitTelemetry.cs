@@ -140,6 +140,17 @@ public static class FitTelemetry
         WorkerCompute.Record(wallMs, new KeyValuePair<string, object?>(WorkerIdAttribute, workerId));
     }
 
+    /// <summary>Records a worker failure as a span of its own (<c>fit.worker_failure</c>) carrying the exception, stack
+    /// trace included, so that it reaches the telemetry file and any collector rather than the terminal.</summary>
+    /// <param name="workerId">The worker.</param>
+    /// <param name="error">What it threw.</param>
+    public static void RecordWorkerFailure(string workerId, Exception error)
+    {
+        using var span = Source.StartActivity("fit.worker_failure");
+        span?.SetTag(WorkerIdAttribute, workerId);
+        span?.AddException(error);
+    }
+
     private static Histogram<double> Milliseconds(string name, string description) =>
         Meter.CreateHistogram(name, "ms", description, tags: null, new InstrumentAdvice<double> { HistogramBucketBoundaries = MillisecondBuckets });
 }

@@ -41,7 +41,8 @@ public sealed class JsonLinesActivityExporter(TelemetryJsonLines file) : BaseExp
             json.WriteString("span_id", activity.SpanId.ToHexString());
             if (activity.ParentSpanId == default) json.WriteNull("parent_span_id");
             else json.WriteString("parent_span_id", activity.ParentSpanId.ToHexString());
-            json.WriteString("start_utc", new DateTimeOffset(DateTime.SpecifyKind(activity.StartTimeUtc, DateTimeKind.Utc)));
+            // UTC with a Z like every time the program writes, here with the 100 ns resolution the critical-path analysis needs.
+            json.WriteString("start_utc", DateTime.SpecifyKind(activity.StartTimeUtc, DateTimeKind.Utc).ToString("O", System.Globalization.CultureInfo.InvariantCulture));
             JsonAttributeWriter.WriteNumber(json, "duration_ms", activity.Duration.TotalMilliseconds);
             json.WriteString("status", activity.Status switch
             {

@@ -14,7 +14,7 @@ public sealed class TelemetryJsonLines : IDisposable
     public const string FileName = "telemetry.jsonl";
 
     private readonly object _gate = new();
-    private readonly FileStream _stream;
+    private readonly Stream _stream;
 
     /// <summary>Opens <paramref name="path"/> for appending, creating it if needed.</summary>
     /// <param name="path">The file.</param>
@@ -24,7 +24,7 @@ public sealed class TelemetryJsonLines : IDisposable
         Path = path;
         try
         {
-            _stream = new FileStream(path, FileMode.Append, FileAccess.Write, FileShare.ReadWrite | FileShare.Delete);
+            _stream = WriteStreams.Open(path, FileMode.Append, FileAccess.Write, FileShare.ReadWrite | FileShare.Delete);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -34,6 +34,10 @@ public sealed class TelemetryJsonLines : IDisposable
 
     /// <summary>The file.</summary>
     public string Path { get; }
+
+    /// <summary>The first failed write (file and cause), or null: telemetry is diagnostics, so a failure is reported
+    /// rather than stopping the fit.</summary>
+    public string? WriteFailure { get; private set; }
 
     /// <summary>Appends <paramref name="lines"/> (each a JSON object without line feed) and flushes them to the file.</summary>
     /// <param name="lines">The lines.</param>
@@ -55,6 +59,7 @@ public sealed class TelemetryJsonLines : IDisposable
             }
             catch (Exception e) when (e is IOException or ObjectDisposedException)
             {
+                WriteFailure ??= $"{Path}: {e.Message}";
                 return false;
             }
         }

@@ -45,6 +45,9 @@ public sealed class TelemetrySession : IDisposable
     /// <summary>The JSON-lines file.</summary>
     public string TelemetryPath => _file.Path;
 
+    /// <summary>The first failed write to the JSON-lines file (file and cause), or null.</summary>
+    public string? WriteFailure => _file.WriteFailure;
+
     /// <summary>Starts exporting.</summary>
     /// <param name="runFolder">The run folder (must exist); <c>telemetry.jsonl</c> is appended to there.</param>
     /// <param name="otlpEndpoint">An OTLP/gRPC collector, e.g. <c>http://localhost:4317</c>, or null for the file only.</param>

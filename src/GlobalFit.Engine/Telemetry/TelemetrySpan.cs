@@ -44,6 +44,9 @@ internal sealed record TelemetrySpan(int Line, string Name, string TraceId, stri
         throw new InvalidInputException(path, string.Create(CultureInfo.InvariantCulture, $"line {Line}"), $"{Name} span has no text attribute {attribute}");
     }
 
+    public string? OptionalText(string attribute) =>
+        Attributes.TryGetValue(attribute, out var v) && v.ValueKind == JsonValueKind.String && v.GetString() is { Length: > 0 } s ? s : null;
+
     public double? OptionalDouble(string attribute) =>
         Attributes.TryGetValue(attribute, out var v) && v.ValueKind == JsonValueKind.Number ? v.GetDouble() : null;
 }

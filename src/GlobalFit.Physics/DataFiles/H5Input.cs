@@ -22,7 +22,13 @@ internal sealed class H5Input(string source)
         {
             return read();
         }
-        catch (Exception e) when (e is not InvalidInputException and not OutOfMemoryException)
+        catch (OutOfMemoryException e)
+        {
+            // The file as a whole was checked to fit in memory when it was opened, so an allocation the library cannot
+            // make comes from a size field inside the file that no honest file of this length holds.
+            throw Error(location, $"records a size that cannot be right for a file of this length (the file is damaged: {e.Message})", e);
+        }
+        catch (Exception e) when (e is not InvalidInputException)
         {
             throw Error(location, $"cannot be read ({e.Message})", e);
         }

@@ -9,7 +9,7 @@ namespace GlobalFit.Physics.DataFiles;
 public static class ObservationFile
 {
     /// <summary>The layout version this build writes, and the only one it reads.</summary>
-    public const int CurrentFormatVersion = 1;
+    public const int CurrentFormatVersion = 2;
 
     /// <summary>Writes <paramref name="observation"/> to <paramref name="path"/> in the current layout version.</summary>
     /// <param name="observation">What to write.</param>

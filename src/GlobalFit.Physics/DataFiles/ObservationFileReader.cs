@@ -47,10 +47,10 @@ internal sealed class ObservationFileReader : IDisposable
         {
             throw input.Error(null, $"cannot be opened ({e.Message})", e);
         }
-        catch (Exception e) when (e is not OutOfMemoryException)
+        catch (Exception e)
         {
-            // What passed the signature and length check but PureHDF cannot parse (a damaged superblock
-            // or root object header) arrives here as a plain Exception.
+            // What passed the signature, length and memory checks but PureHDF cannot parse (a damaged superblock or
+            // root object header, or a size field beyond any allocation) arrives here as a plain Exception.
             throw input.Error(null, $"is not a readable HDF5 file, or is truncated ({e.Message})", e);
         }
         return new ObservationFileReader(file, input);
@@ -76,6 +76,12 @@ internal sealed class ObservationFileReader : IDisposable
             throw input.Error(null, length == 0 ? "is empty, not an HDF5 file" : "is not an HDF5 file (no HDF5 signature at its start)");
         if (facts.RecordedLengthBytes > length)
             throw input.Error(null, $"is truncated: it has {length} bytes but its HDF5 superblock records {facts.RecordedLengthBytes}");
+        // Reading holds the samples (about the file's size) and the A/E/T conversion of X/Y/Z channels (as much again);
+        // four times the length leaves room for the library's buffers. Checked before anything is allocated.
+        long available = GC.GetGCMemoryInfo().TotalAvailableMemoryBytes;
+        if (length > available / 4)
+            throw input.Error(null, string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                $"holds {length / (double)(1 << 30):F1} GiB; reading it needs about {4.0 * length / (1 << 30):F1} GiB, more than the {available / (double)(1 << 30):F1} GiB available"));
     }
 
     /// <summary>Reads the root <c>format_version</c> and rejects files that are not observation files or are too new.</summary>
@@ -85,6 +91,11 @@ internal sealed class ObservationFileReader : IDisposable
             throw _input.Error(H5Input.AttributePath(Root, L.FormatVersionAttribute),
                 "missing: this HDF5 file is not a globalfit observation file (layout in src/GlobalFit.Physics/DataFiles/LAYOUT.md)");
         long version = _input.ReadInteger(_file, Root, L.FormatVersionAttribute);
+        if (version == 1)
+            throw _input.Error(H5Input.AttributePath(Root, L.FormatVersionAttribute),
+                $"format version 1 was written by an earlier globalfit whose truth columns and class ids have since been renamed "
+                + $"(amp is now amplitude); simulate the data again, or set format_version = {ObservationFile.CurrentFormatVersion} "
+                + "after renaming the truth columns as in src/GlobalFit.Physics/DataFiles/LAYOUT.md");
         if (version != ObservationFile.CurrentFormatVersion)
             throw _input.Error(H5Input.AttributePath(Root, L.FormatVersionAttribute),
                 $"format version {version} is not supported; this build reads version {ObservationFile.CurrentFormatVersion}");

@@ -4,7 +4,7 @@ namespace GlobalFit.Physics.DataFiles;
 /// <remarks>
 /// <para>The table is generic so that every source class stores its injections the same way: the class id
 /// names the table, <see cref="Columns"/> name the parameters in order
-/// (e.g. <c>f0_hz</c>, <c>fdot_hz_s</c>, <c>amp</c>, …, <c>snr</c>; the project's parameter names), and each row has a
+/// (e.g. <c>f0_hz</c>, <c>fdot_hz_s</c>, <c>amplitude</c>, …, <c>snr</c>; the project's parameter names), and each row has a
 /// string id. Values may be NaN where a quantity is unknown (e.g. an SNR that was not computed).</para>
 /// <para>Immutable: the value array is owned by the table once handed over. Safe to share between threads.</para>
 /// </remarks>

@@ -9,7 +9,8 @@ public static class AtomicFile
 {
     /// <summary>Writes <paramref name="path"/> through <paramref name="writeContent"/>.</summary>
     /// <exception cref="InvalidInputException">The path exists and <paramref name="overwrite"/> is false, its folder
-    /// does not exist, or the file system refused the write or the rename.</exception>
+    /// does not exist, or the path cannot hold a file (a folder in the way, no permission).</exception>
+    /// <exception cref="FileWriteException">The write or the rename failed (full disk, I/O error).</exception>
     public static void Write(string path, bool overwrite, Action<Stream> writeContent)
     {
         string fullPath = Path.GetFullPath(path);
@@ -23,17 +24,21 @@ public static class AtomicFile
         bool renamed = false;
         try
         {
-            using (var stream = new FileStream(temporary, FileMode.CreateNew, FileAccess.ReadWrite, FileShare.None))
+            using (var stream = WriteStreams.Open(temporary, FileMode.CreateNew, FileAccess.ReadWrite, FileShare.None))
             {
                 writeContent(stream);
-                stream.Flush(flushToDisk: true);
+                WriteStreams.FlushToDisk(stream);
             }
             File.Move(temporary, fullPath, overwrite);
             renamed = true;
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e) when (FileWriteException.IoCause(e) is { } cause)
         {
-            throw new InvalidInputException(path, null, $"cannot be written: {e.Message}", e);
+            // A path the user chose that cannot hold a file (a folder in the way, no permission, a missing or special
+            // folder) is bad input; anything else (full disk, I/O error) is a failed write.
+            if (Directory.Exists(fullPath) || cause is UnauthorizedAccessException or FileNotFoundException or DirectoryNotFoundException)
+                throw new InvalidInputException(path, null, $"cannot be written: {FileProblem.Describe(fullPath, cause)}", e);
+            throw new FileWriteException(path, cause);
         }
         finally
         {

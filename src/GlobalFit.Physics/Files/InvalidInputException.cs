@@ -29,6 +29,16 @@ public sealed class InvalidInputException : Exception
     /// <summary>What is wrong.</summary>
     public string Problem { get; }
 
+    // A refusal is one terminal line: text quoted from the damaged input or from a library (a file signature, a key
+    // with a line break) could otherwise carry line breaks or terminal control codes into the message.
     private static string Format(string source, string? location, string problem) =>
-        location is null ? $"{source}: {problem}" : $"{source}: {location}: {problem}";
+        OneLine(location is null ? $"{source}: {problem}" : $"{source}: {location}: {problem}");
+
+    private static string OneLine(string text) =>
+        text.Any(char.IsControl)
+            ? string.Create(text.Length, text, (span, t) =>
+            {
+                for (int i = 0; i < t.Length; i++) span[i] = t[i] is '\n' or '\r' or '\t' ? ' ' : char.IsControl(t[i]) ? '?' : t[i];
+            })
+            : text;
 }

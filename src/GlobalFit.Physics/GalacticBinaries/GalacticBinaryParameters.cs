@@ -15,7 +15,7 @@ namespace GlobalFit.Physics.GalacticBinaries;
 /// </remarks>
 /// <param name="FrequencyHz">f0, gravitational-wave frequency at t = 0 (column <c>f0_hz</c>).</param>
 /// <param name="FrequencyDerivativeHzS">ḟ, the frequency drift (column <c>fdot_hz_s</c>).</param>
-/// <param name="Amplitude">A, dimensionless strain amplitude; face-on strain per polarisation is 2A (column <c>amp</c>).</param>
+/// <param name="Amplitude">A, dimensionless strain amplitude; face-on strain per polarisation is 2A (column <c>amplitude</c>).</param>
 /// <param name="EclipticLatitudeRad">β in [−π/2, π/2] (column <c>beta_rad</c>).</param>
 /// <param name="EclipticLongitudeRad">λ (column <c>lambda_rad</c>).</param>
 /// <param name="InclinationRad">ι, orbital angular momentum to line of sight (column <c>iota_rad</c>).</param>
@@ -40,7 +40,7 @@ public readonly record struct GalacticBinaryParameters(
     public const string FrequencyDerivativeColumn = "fdot_hz_s";
 
     /// <summary>Column name of <see cref="Amplitude"/>.</summary>
-    public const string AmplitudeColumn = "amp";
+    public const string AmplitudeColumn = "amplitude";
 
     /// <summary>Column name of <see cref="EclipticLatitudeRad"/>.</summary>
     public const string EclipticLatitudeColumn = "beta_rad";
@@ -66,6 +66,19 @@ public readonly record struct GalacticBinaryParameters(
         FrequencyColumn, FrequencyDerivativeColumn, AmplitudeColumn, EclipticLatitudeColumn,
         EclipticLongitudeColumn, InclinationColumn, PolarisationColumn, InitialPhaseColumn,
     ];
+
+    /// <summary>The nine columns of truth tables and catalogues, in the order both files use: the eight of
+    /// <see cref="ColumnNames"/> with <c>fddot_hz_s2</c> beside <c>fdot_hz_s</c>, so the frequency and its derivatives
+    /// read together and a truth row and a catalogue row line up column for column.</summary>
+    public static ImmutableArray<string> TableColumnNames { get; } =
+    [
+        FrequencyColumn, FrequencyDerivativeColumn, SecondFrequencyDerivativeColumn, AmplitudeColumn, EclipticLatitudeColumn,
+        EclipticLongitudeColumn, InclinationColumn, PolarisationColumn, InitialPhaseColumn,
+    ];
+
+    /// <summary>The values of the nine <see cref="TableColumnNames"/>, in that order: the row of truth tables and catalogues.</summary>
+    public double[] ToTableRow() =>
+        [FrequencyHz, FrequencyDerivativeHzS, SecondFrequencyDerivativeHzS2, Amplitude, EclipticLatitudeRad, EclipticLongitudeRad, InclinationRad, PolarisationRad, InitialPhaseRad];
 
     /// <summary>The values of the eight <see cref="ColumnNames"/>, in that order: the one row layout of samples,
     /// handovers and catalogue rows.</summary>

@@ -104,10 +104,22 @@ public class BadInputTests
     public void An_unsupported_foreground_duration_is_rejected_naming_the_option()
     {
         using var folder = new TempFolder();
-        var result = CliRun.Run("sensitivity", "--years", "3", "--out", folder.File("c.csv"));
+        var result = CliRun.Run("sensitivity", "--foreground-fit-years", "3", "--out", folder.File("c.csv"));
         Assert.Equal(2, result.ExitCode);
-        Assert.Contains("--years", result.Error);
+        Assert.Contains("--foreground-fit-years", result.Error);
         Assert.Contains("0.5, 1, 2 and 4", result.Error);
         Assert.False(File.Exists(folder.File("c.csv")));
+    }
+
+    [Fact]
+    public void A_scenario_that_is_not_utf8_text_is_refused_in_those_words()
+    {
+        using var folder = new TempFolder();
+        string scenario = folder.File("s.toml");
+        File.WriteAllBytes(scenario, [.. "name = \""u8, 0xFF, 0xFE, .. "\"\n[observation]\nduration_days = 2\n"u8]);
+        var result = CliRun.Run("simulate", scenario, "--out", folder.File("d.h5"));
+        Assert.Equal(2, result.ExitCode);
+        Assert.Contains("s.toml: line 1: is not UTF-8 text", result.Error, StringComparison.Ordinal);
+        Assert.DoesNotContain("UTF-16", result.Error, StringComparison.Ordinal); // not the parser's own complaint
     }
 }

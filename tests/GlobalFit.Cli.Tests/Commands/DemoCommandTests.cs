@@ -13,7 +13,8 @@ public class DemoCommandTests
         var first = CliRun.Run("demo", "--out", demo, "--iterations", "2");
         Assert.Equal(0, first.ExitCode);
         Assert.Contains("mean estimate/model", first.Out);
-        Assert.Matches(@"injected with SNR >= 7; found \d+, missed \d+; \d+ catalogue entries, \d+ spurious", first.Out);
+        Assert.Matches(@"galactic_binaries: \d+ injected with SNR >= 7; found \d+, missed \d+; \d+ catalogued, \d+ spurious", first.Out);
+        Assert.Contains("matching: same source when the noise-weighted overlap", first.Out);
         foreach (string file in new[] { "data.h5", "noise.png", "fit.toml", "run/run.toml", "run/catalogue.csv", "run/catalogue.h5", "run/telemetry.jsonl" })
             Assert.True(File.Exists(Path.Combine(demo, file)), file);
         Assert.Equal(0, CliRun.Run("demo", "--out", demo, "--iterations", "2").ExitCode);

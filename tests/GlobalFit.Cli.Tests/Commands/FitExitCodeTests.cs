@@ -20,7 +20,7 @@ public sealed class FitExitCodeTests
     [Fact]
     public void A_write_failure_names_the_cause_keeps_the_checkpoint_and_prints_how_to_resume()
     {
-        var (_, error) = Run(new FitOutcome(FitOutcomeKind.WriteFailed, 3, 2, "RUN/checkpoint/latest.tmp cannot be written: No space left on device"));
+        var (_, error) = Run(new FitOutcome(FitOutcomeKind.WriteFailed, 3, 2, "RUN/checkpoints/latest.tmp cannot be written: No space left on device"));
         Assert.Contains("No space left on device", error, StringComparison.Ordinal);
         Assert.Contains("checkpoint (iteration 2) is kept", error, StringComparison.Ordinal);
         Assert.Contains("globalfit resume", error, StringComparison.Ordinal);

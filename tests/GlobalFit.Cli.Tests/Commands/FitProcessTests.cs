@@ -39,7 +39,7 @@ public class FitProcessTests
 
         var catalogue = CliRun.Run("catalogue", killedRun, "--format", "json");
         Assert.Equal(0, catalogue.ExitCode);
-        Assert.True(JsonDocument.Parse(catalogue.Out).RootElement.GetProperty("entries").GetArrayLength() >= 3);
+        Assert.True(JsonDocument.Parse(catalogue.Out).RootElement.GetProperty("sources").GetArrayLength() >= 3);
         var trace = CliRun.Run("trace", killedRun, "--json");
         Assert.Equal(0, trace.ExitCode);
     }
@@ -51,7 +51,7 @@ public class FitProcessTests
         string data = folder.File("data.h5");
         Assert.Equal(0, CliRun.Run("simulate", folder.Write("scenario.toml", SmallFitRecord.Scenario), "--out", data).ExitCode);
         string run = folder.File("run");
-        using var fit = Globalfit.Start("fit", folder.Write("fit.toml", Config(data, run).Replace("checkpoint_every = 1", "checkpoint_every = 100", StringComparison.Ordinal)));
+        using var fit = Globalfit.Start("fit", folder.Write("fit.toml", Config(data, run).Replace("checkpoint_every_iterations = 1", "checkpoint_every_iterations = 100", StringComparison.Ordinal)));
         WaitForIteration(run, 2, fit, TimeSpan.FromMinutes(5));
         using (var signal = Process.Start("kill", ["-TERM", fit.Id.ToString(System.Globalization.CultureInfo.InvariantCulture)])) signal.WaitForExit();
         Assert.True(fit.WaitForExit(TimeSpan.FromMinutes(2)), "the fit did not stop after SIGTERM");
@@ -60,7 +60,7 @@ public class FitProcessTests
         Assert.Equal("interrupted", status.GetProperty("state").GetString());
         long iteration = status.GetProperty("iteration").GetInt64();
         Assert.True(iteration >= 2);
-        // checkpoint_every = 100, so this checkpoint can only come from the signal.
+        // checkpoint_every_iterations = 100, so this checkpoint can only come from the signal.
         Assert.Equal(iteration, status.GetProperty("checkpoint_iteration").GetInt64());
     }
 

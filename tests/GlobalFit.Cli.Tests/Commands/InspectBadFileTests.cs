@@ -21,7 +21,7 @@ public class InspectBadFileTests
         };
         if (withVersion)
         {
-            file.Attributes["format_version"] = 1;
+            file.Attributes["format_version"] = 2;
             file.Attributes["created_utc"] = "2026-12-01T00:00:00Z";
             file.Attributes["generator"] = "test";
         }

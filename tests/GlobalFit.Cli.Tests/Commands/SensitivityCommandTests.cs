@@ -21,7 +21,7 @@ public class SensitivityCommandTests
         Assert.Equal(1e-3, at1mHz[0], 1e-15);
         Assert.Equal(8.844449e-43, at1mHz[1], 8.844449e-43 * 1e-6);
         Assert.Equal(1.634101e-38, at1mHz[5], 1.634101e-38 * 1e-6);
-        Assert.Equal(0.0, at1mHz[6]); // no foreground without --years
+        Assert.Equal(0.0, at1mHz[6]); // no foreground without --foreground-fit-years
         Assert.True(new FileInfo(folder.File("curve.png")).Length > 10_000);
     }
 
@@ -30,7 +30,7 @@ public class SensitivityCommandTests
     {
         using var folder = new TempFolder();
         string csv = folder.File("curve.csv");
-        Assert.Equal(0, CliRun.Run("sensitivity", "--years", "4", "--out", csv, "--f-min", "1e-3", "--f-max", "2e-3", "--points", "2", "--json").ExitCode);
+        Assert.Equal(0, CliRun.Run("sensitivity", "--foreground-fit-years", "4", "--out", csv, "--f-min", "1e-3", "--f-max", "2e-3", "--points", "2", "--json").ExitCode);
         var row = File.ReadAllLines(csv)[1].Split(',').Select(v => double.Parse(v, CultureInfo.InvariantCulture)).ToArray();
         // Source: derived: Robson, Cornish & Liu 2019 Eq. 14 fit for 4 yr at 1 mHz, 6.662414e-38 (formula from memory;
         // same value as tests/GlobalFit.Physics.Tests/CheckValues/galactic-confusion.csv).

@@ -13,14 +13,14 @@ public class SimulateAndInspectTests
         string data = folder.File("d.h5");
         var simulate = CliRun.Run("simulate", scenario, "--out", data);
         Assert.Equal(0, simulate.ExitCode);
-        Assert.Contains("17280 samples per channel", simulate.Out);
+        Assert.Contains("17280 points per channel", simulate.Out);
 
         var inspect = CliRun.Run("inspect", data, "--json");
         Assert.Equal(0, inspect.ExitCode);
         using var json = JsonDocument.Parse(inspect.Out);
         var root = json.RootElement;
-        Assert.Equal(17280, root.GetProperty("samples").GetInt32());
-        Assert.Equal(10.0, root.GetProperty("dt_s").GetDouble());
+        Assert.Equal(17280, root.GetProperty("points_per_channel").GetInt32());
+        Assert.Equal(10.0, root.GetProperty("cadence_s").GetDouble());
         Assert.Equal("7", root.GetProperty("provenance").GetProperty("seed").GetString());
         foreach (var channel in root.GetProperty("channels").EnumerateArray())
         {

@@ -13,7 +13,16 @@ public class TraceCommandTests
         + ",\"status\":\"unset\",\"attributes\":{" + attributes + "}}";
 
     private static string Worker(string trace, string id, string stage, string worker, string start, double duration, double wall) =>
-        Span("fit.worker_update", trace, id, stage, start, duration, $"\"globalfit.worker.id\":\"{worker}\",\"globalfit.worker.wall_ms\":{wall}");
+        Span("fit.worker_update", trace, id, stage, start, duration, $"\"globalfit.worker.id\":\"{worker}\",\"globalfit.worker.wall_ms\":{wall}"
+            + (Labels.TryGetValue(worker, out var label) ? $",\"globalfit.worker.label\":\"{label}\"" : ""));
+
+    // The labels the fit writes: each band's core frequency range; the noise worker's label is left out, as in files
+    // written before labels existed.
+    private static readonly Dictionary<string, string> Labels = new()
+    {
+        ["galactic_binaries/0000"] = "2.9700-2.9900 mHz",
+        ["galactic_binaries/0001"] = "2.9900-3.0100 mHz",
+    };
 
     // Iteration 1: bands 0000 and 0001 end at 0.4 s and 1.0 s, then the noise worker alone. Iteration 2: band 0000 last.
     private static readonly string[] Lines =
@@ -45,10 +54,12 @@ public class TraceCommandTests
 
         Assert.Equal(0, result.ExitCode);
         Assert.Contains("iteration 1   1500.0 ms, orchestration overhead 160.0 ms", result.Out);   // 1500 − (950 + 390)
-        Assert.Contains("stage 0   last: galactic_binaries/0001 (compute 950.0 ms), 600.0 ms after the other, which waited 600.0 ms", result.Out);
-        Assert.Contains("stage 1   last: noise (compute 390.0 ms), the only worker", result.Out);
+        // Stages count from 1 like iterations; a band's id comes with its frequency range.
+        Assert.Contains("stage 1   last: galactic_binaries/0001 [2.9900-3.0100 mHz] (compute 950.0 ms), 600.0 ms after the other, which waited 600.0 ms", result.Out);
+        Assert.Contains("stage 2   last: noise (compute 390.0 ms), the only worker", result.Out);
+        Assert.DoesNotContain("stage 0", result.Out);
         Assert.Contains("summary       2 iterations", result.Out);
-        Assert.Contains("galactic_binaries/0000", result.Out.Split("summary")[1]);
+        Assert.Contains("galactic_binaries/0000 [2.9700-2.9900 mHz]", result.Out.Split("summary")[1]);
         Assert.Equal("", result.Error);
     }
 
@@ -62,8 +73,11 @@ public class TraceCommandTests
         using var json = JsonDocument.Parse(result.Out);
         var iteration = Assert.Single(json.RootElement.GetProperty("iterations").EnumerateArray());
         Assert.Equal(2, iteration.GetProperty("iteration").GetInt64());
+        Assert.Equal("2026-12-01T10:00:02Z", iteration.GetProperty("start_utc").GetString()); // UTC with Z, as everywhere
         var stage = iteration.GetProperty("stages")[0];
+        Assert.Equal(1, stage.GetProperty("stage").GetInt32());
         Assert.Equal("galactic_binaries/0000", stage.GetProperty("last_worker").GetString());
+        Assert.Equal("2.9700-2.9900 mHz", stage.GetProperty("last_worker_label").GetString());
         Assert.Equal(400, stage.GetProperty("lead_ms").GetDouble(), 1e-9);
         Assert.Equal(1, json.RootElement.GetProperty("summary").GetProperty("iterations").GetInt32());
     }

@@ -42,7 +42,7 @@ internal sealed class TempFolder : IDisposable
 /// <summary>Small scenarios that simulate in well under a second.</summary>
 internal static class Scenarios
 {
-    /// <summary>Two days at 10 s: 17,280 samples per channel.</summary>
+    /// <summary>Two days at 10 s: 17,280 points per channel.</summary>
     public const string TwoDays = """
         name = "two test days"
         seed = 7

@@ -31,7 +31,10 @@ internal sealed class CoordinatorHarness
             system.ActorOf(Props.Create(() => new StubStoreActor(Appended))),
             system.ActorOf(Props.Create(() => new StubCheckpointerActor(Checkpoints))),
             Progress,
-            (id, state) => state is null ? Plan.ClassOf(id).CreateWorker(id, 1) : Plan.ClassOf(id).RestoreWorker(id, state));
+            (id, state) => state is null ? Plan.ClassOf(id).CreateWorker(id, 1) : Plan.ClassOf(id).RestoreWorker(id, state))
+        {
+            RecordFailure = (id, error) => Failures.Enqueue((id, error)),
+        };
         Coordinator = system.ActorOf(FitCoordinator.Props(setup));
     }
 
@@ -44,6 +47,8 @@ internal sealed class CoordinatorHarness
     public ConcurrentQueue<AppendSamples> Appended { get; } = new();
 
     public ConcurrentQueue<WriteCheckpoint> Checkpoints { get; } = new();
+
+    public ConcurrentQueue<(string WorkerId, Exception Error)> Failures { get; } = new();
 
     public RecordingProgress Progress { get; } = new();
 }

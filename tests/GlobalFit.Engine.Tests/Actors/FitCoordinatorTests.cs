@@ -55,7 +55,7 @@ public sealed class FitCoordinatorTests : Akka.TestKit.Xunit2.TestKit
         Assert.Equal([1L, 2, 3, 4, 5], appended.Select(a => a.Iteration));
         Assert.All(appended, a => Assert.Equal(["noise", "stub/0", "stub/1", "stub/2"], a.Blocks.Select(b => b.WorkerId)));
         Assert.All(appended, a => Assert.All(a.Blocks, b => Assert.Equal(a.Iteration, b.Iteration)));
-        // checkpoint_every = 2 and the final iteration.
+        // checkpoint_every_iterations = 2 and the final iteration.
         Assert.Equal([2L, 4, 5], harness.Checkpoints.Select(c => c.Checkpoint.Iteration));
         Assert.Equal(5, harness.Progress.Reports.Count);
     }
@@ -75,6 +75,10 @@ public sealed class FitCoordinatorTests : Akka.TestKit.Xunit2.TestKit
 
         Assert.Equal(FitOutcomeKind.Completed, finished.Outcome.Kind);
         Assert.Equal(2, faulty.Progress.Warnings.Count(w => w.Contains("stub/1", StringComparison.Ordinal)));
+        // The terminal gets one line per failure; the failure log gets the exception with its stack trace.
+        Assert.All(faulty.Progress.Warnings, w => Assert.DoesNotContain('\n', w));
+        Assert.Equal(["stub/1", "stub/1"], faulty.Failures.Select(f => f.WorkerId));
+        Assert.All(faulty.Failures, f => Assert.Contains("StubSourceClass", f.Error.StackTrace, StringComparison.Ordinal));
         var expected = clean.Appended.SelectMany(a => a.Blocks).Select(b => (b.WorkerId, b.Iteration, b.Values[0])).ToList();
         var actual = faulty.Appended.SelectMany(a => a.Blocks).Select(b => (b.WorkerId, b.Iteration, b.Values[0])).ToList();
         Assert.Equal(expected, actual);

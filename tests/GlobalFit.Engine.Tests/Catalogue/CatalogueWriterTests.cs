@@ -11,7 +11,7 @@ namespace GlobalFit.Engine.Tests.Catalogue;
 
 public class CatalogueWriterTests
 {
-    private static readonly ImmutableArray<string> GbColumns = ["f0_hz", "amp"];
+    private static readonly ImmutableArray<string> GbColumns = ["f0_hz", "amplitude"];
 
     private static IReadOnlyList<CatalogueRecord> Records() =>
     [
@@ -19,7 +19,7 @@ public class CatalogueWriterTests
             [0.9e-3, 1e-22, 1e-3, 2e-22, 1.1e-3, 3e-22]),
         new("gb-0002", "galactic_binaries", 1.0, double.NaN, GbColumns, [2e-3, 5e-23], [2e-3, 5e-23], [2e-3, 5e-23],
             [2e-3, 5e-23]),
-        new("mbh-0001", "massive_black_holes", 0.5, 300, ["mchirp_msun"], [1e6], [0.9e6], [1.2e6], [1e6, 0.9e6]),
+        new("mbh-0001", "massive_black_hole_binaries", 0.5, 300, ["mchirp_msun"], [1e6], [0.9e6], [1.2e6], [1e6, 0.9e6]),
     ];
 
     [Fact]
@@ -27,54 +27,54 @@ public class CatalogueWriterTests
     {
         var lines = CatalogueCsvWriter.Format(Records()).Split('\n');
 
-        Assert.Equal("id,class,confidence,snr,f0_hz,f0_hz_lo,f0_hz_hi,amp,amp_lo,amp_hi,mchirp_msun,mchirp_msun_lo,mchirp_msun_hi", lines[0]);
-        Assert.Equal("gb-0001,galactic_binaries,0.75,12.5,0.001,0.0009,0.0011,2E-22,1E-22,3E-22,,,", lines[1]);
+        Assert.Equal("id,class,confidence,snr,f0_hz,f0_hz_lo,f0_hz_hi,amplitude,amplitude_lo,amplitude_hi,mchirp_msun,mchirp_msun_lo,mchirp_msun_hi", lines[0]);
+        Assert.Equal("gb-0001,galactic_binaries,0.75,12.5,0.001,0.0009,0.0011,2e-22,1e-22,3e-22,,,", lines[1]);
         Assert.Equal("NaN", lines[2].Split(',')[3]);
-        Assert.Equal("mbh-0001,massive_black_holes,0.5,300,,,,,,,1000000,900000,1200000", lines[3]);
+        Assert.Equal("mbh-0001,massive_black_hole_binaries,0.5,300,,,,,,,1000000,900000,1200000", lines[3]);
         Assert.Equal("", lines[4]);   // the file ends with a line feed
         Assert.Equal(5, lines.Length);
         Assert.Equal(Records()[0].Upper[1], double.Parse(lines[1].Split(',')[9], CultureInfo.InvariantCulture));
     }
 
     [Fact]
-    public void Hdf5_catalogue_reads_back_entries_summaries_and_samples()
+    public void Hdf5_catalogue_reads_back_sources_summaries_and_samples()
     {
         using var run = new TemporaryRunFolder();
         string path = run.File("catalogue.h5");
         CatalogueHdf5Writer.Write(path, Records(), overwrite: false);
 
-        using var file = H5File.OpenRead(path);
-        Assert.Equal(1, file.Attribute("format_version").Read<int>());
+        using var file = H5File.OpenRead(path, CatalogueHdf5Layout.ReadOptions);
+        Assert.Equal(2, file.Attribute("format_version").Read<int>());
         var gb = file.Group("catalogue/galactic_binaries");
-        Assert.Equal(["f0_hz", "amp"], gb.Attribute("columns").Read<string[]>());
-        var entries = gb.Dataset("entries").Read<CatalogueEntryRow[]>();
-        Assert.Equal(["gb-0001", "gb-0002"], entries.Select(e => e.Id));
-        Assert.Equal([0.75, 1.0], entries.Select(e => e.Confidence));
-        Assert.True(double.IsNaN(entries[1].Snr));
-        Assert.Equal([(0L, 3L), (3L, 1L)], entries.Select(e => (e.FirstSample, e.SampleCount)));
+        Assert.Equal(["f0_hz", "amplitude"], gb.Attribute("columns").Read<string[]>());
+        var rows = gb.Dataset("sources").Read<CatalogueSourceRow[]>();
+        Assert.Equal(["gb-0001", "gb-0002"], rows.Select(e => e.Id));
+        Assert.Equal([0.75, 1.0], rows.Select(e => e.Confidence));
+        Assert.True(double.IsNaN(rows[1].Snr));
+        Assert.Equal([(0L, 3L), (3L, 1L)], rows.Select(e => (e.FirstSample, e.SampleCount)));
         Assert.Equal(new[,] { { 1e-3, 2e-22 }, { 2e-3, 5e-23 } }, gb.Dataset("median").Read<double[,]>());
         Assert.Equal(new[,] { { 1.1e-3, 3e-22 }, { 2e-3, 5e-23 } }, gb.Dataset("upper").Read<double[,]>());
         Assert.Equal(new[,] { { 0.9e-3, 1e-22 }, { 1e-3, 2e-22 }, { 1.1e-3, 3e-22 }, { 2e-3, 5e-23 } }, gb.Dataset("samples").Read<double[,]>());
-        Assert.Equal([0L, 0L, 0L, 1L], gb.Dataset("sample_entry").Read<long[]>());
-        var mbh = file.Group("catalogue/massive_black_holes");
+        Assert.Equal([0L, 0L, 0L, 1L], gb.Dataset("sample_source").Read<long[]>());
+        var mbh = file.Group("catalogue/massive_black_hole_binaries");
         Assert.Equal(new[,] { { 1e6 }, { 0.9e6 } }, mbh.Dataset("samples").Read<double[,]>());
     }
 
     [Fact]
-    public void Json_catalogue_holds_entries_with_named_summaries_and_sample_rows()
+    public void Json_catalogue_holds_sources_with_named_summaries_and_sample_rows()
     {
         using var run = new TemporaryRunFolder();
         string path = run.File("catalogue.json");
         CatalogueJsonWriter.Write(path, Records(), overwrite: false);
 
         using var json = JsonDocument.Parse(File.ReadAllText(path));
-        Assert.Equal(1, json.RootElement.GetProperty("format_version").GetInt32());
-        var first = json.RootElement.GetProperty("entries")[0];
+        Assert.Equal(2, json.RootElement.GetProperty("format_version").GetInt32());
+        var first = json.RootElement.GetProperty("sources")[0];
         Assert.Equal("gb-0001", first.GetProperty("id").GetString());
         Assert.Equal(1.1e-3, first.GetProperty("upper").GetProperty("f0_hz").GetDouble());
         Assert.Equal(3, first.GetProperty("samples").GetArrayLength());
         Assert.Equal(3e-22, first.GetProperty("samples")[2][1].GetDouble());
-        Assert.Equal("NaN", json.RootElement.GetProperty("entries")[1].GetProperty("snr").GetString());
+        Assert.Equal("NaN", json.RootElement.GetProperty("sources")[1].GetProperty("snr").GetString());
     }
 
     [Fact]
@@ -111,12 +111,12 @@ public class CatalogueWriterTests
     }
 
     [Fact]
-    public void A_class_whose_entries_hold_no_samples_still_writes()
+    public void A_class_whose_sources_hold_no_samples_still_writes()
     {
         using var run = new TemporaryRunFolder();
         string path = run.File("empty.h5");
         CatalogueHdf5Writer.Write(path, [Records()[0] with { Samples = [] }], overwrite: false);
-        using var file = H5File.OpenRead(path);
-        Assert.Equal(0L, file.Group("catalogue/galactic_binaries").Dataset("entries").Read<CatalogueEntryRow[]>()[0].SampleCount);
+        using var file = H5File.OpenRead(path, CatalogueHdf5Layout.ReadOptions);
+        Assert.Equal(0L, file.Group("catalogue/galactic_binaries").Dataset("sources").Read<CatalogueSourceRow[]>()[0].SampleCount);
     }
 }

@@ -68,6 +68,27 @@ public class ConfigDocumentTests
         Assert.StartsWith("bad.toml: line 2, column 5:", e.Message);
     }
 
+    [Theory]
+    [InlineData("data = \"\"", "empty string")]
+    [InlineData("data = \"   \"", "empty string")]
+    [InlineData("data = \"a\\u0000b.h5\"", "control character")]
+    [InlineData("data = \"a\\nb.h5\"", "control character")]
+    public void An_empty_path_or_one_with_control_characters_is_refused_naming_the_key(string line, string problem)
+    {
+        var root = ConfigDocument.Parse(line + "\n", "run.toml");
+        var e = Assert.Throws<InvalidInputException>(() => root.GetPath("data", "", "/tmp"));
+        Assert.Contains("key 'data'", e.Message, StringComparison.Ordinal);
+        Assert.Contains(problem, e.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_relative_path_is_taken_from_the_given_folder()
+    {
+        var root = ConfigDocument.Parse("data = \"../d.h5\"\n", "run.toml");
+        Assert.Equal("/work/d.h5", root.GetPath("data", "", "/work/configs"));
+        Assert.Equal("/work/configs/run", root.GetPath("run_folder", "run", "/work/configs"));
+    }
+
     [Fact]
     public void A_duplicate_key_is_rejected()
     {

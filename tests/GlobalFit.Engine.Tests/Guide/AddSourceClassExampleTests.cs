@@ -75,8 +75,9 @@ public sealed class AddSourceClassExampleTests : IDisposable
             spacing_bins = {Spacing}
             steps_per_update = 300
             [noise]
-            foreground = false
             steps_per_update = 10
+            [noise.foreground]
+            enabled = false
             """);
         var outcome = FitRunner.Start(config, new FitRunOptions(new CollectingProgress(), null, CancellationToken.None) { Registry = Registry });
 

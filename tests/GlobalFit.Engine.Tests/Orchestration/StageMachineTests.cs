@@ -165,7 +165,7 @@ public sealed class StageMachineTests
         machine.OnCheckpointWritten(1, null);
         RunIteration(machine, 2);
         machine.OnAppended(2);
-        machine.OnCheckpointWritten(2, "/run/checkpoint/latest.tmp: No space left on device");
+        machine.OnCheckpointWritten(2, "/run/checkpoints/latest.tmp: No space left on device");
         Assert.Equal(FitOutcomeKind.WriteFailed, _host.Outcome!.Kind);
         Assert.Equal(1, _host.Outcome.CheckpointIteration);
         Assert.Contains("No space left", _host.Outcome.Message, StringComparison.Ordinal);
@@ -178,7 +178,7 @@ public sealed class StageMachineTests
         var machine = Machine(iterations: 3, checkpointEvery: 1);
         machine.Start();
         RunIteration(machine, 1);
-        machine.OnAppendFailed(1, "/run/chains/s.0.samples: cannot be appended to: disk full");
+        machine.OnAppendFailed(1, "/run/samples/s.0.samples: cannot be appended to: disk full");
         Assert.Equal(FitOutcomeKind.WriteFailed, _host.Outcome!.Kind);
         Assert.Equal(0, _host.Outcome.IterationsCompleted);
         Assert.Empty(_host.Checkpoints); // nothing is written after a failed write

@@ -16,7 +16,7 @@ public sealed class FitReliabilityTests(SharedFitData data) : IClassFixture<Shar
     {
         using var folder = new TemporaryRunFolder();
         string run = folder.File("run");
-        var progress = new Obstructing(2, () => Directory.CreateDirectory(Path.Combine(run, "checkpoint", "latest.tmp")));
+        var progress = new Obstructing(2, () => Directory.CreateDirectory(Path.Combine(CheckpointFile.Folder(run), "latest.tmp")));
         var outcome = FitRunner.Start(NoiseOnlyConfig(folder, run), new FitRunOptions(progress, null, CancellationToken.None));
 
         Assert.Equal(FitOutcomeKind.WriteFailed, outcome.Kind);
@@ -32,7 +32,7 @@ public sealed class FitReliabilityTests(SharedFitData data) : IClassFixture<Shar
     {
         using var folder = new TemporaryRunFolder();
         string run = folder.File("run");
-        string samples = Path.Combine(run, SampleStore.ChainsFolderName, WorkerFileName.FromWorkerId("noise"));
+        string samples = Path.Combine(run, SampleStore.SamplesFolderName, WorkerFileName.FromWorkerId("noise"));
         var progress = new Obstructing(1, () =>
         {
             File.Delete(samples);
@@ -61,7 +61,7 @@ public sealed class FitReliabilityTests(SharedFitData data) : IClassFixture<Shar
             f_min_hz = 2.97e-3
             f_max_hz = 3.0086e-3
             window_bins = 101
-            padding_bins = 16
+            margin_bins = 16
             steps_per_update = 20
             temperatures = 2
             fstat_cells_per_bin = 1
@@ -139,7 +139,7 @@ public sealed class FitReliabilityTests(SharedFitData data) : IClassFixture<Shar
         string run = folder.File("run"), other = folder.File("other");
         using (var stop = new CancellationTokenSource())
             FitRunner.Start(NoiseOnlyConfig(folder, run), new FitRunOptions(new StopAt(2, stop), null, stop.Token));
-        File.WriteAllText(folder.File("other.toml"), $"data = \"{data.DataPath}\"\nrun_folder = \"{other}\"\niterations = 2\nseed = 17\ncheckpoint_every = 1\n[noise]\nsteps_per_update = 5\n");
+        File.WriteAllText(folder.File("other.toml"), $"data = \"{data.DataPath}\"\nrun_folder = \"{other}\"\niterations = 2\nseed = 17\ncheckpoint_every_iterations = 1\n[noise]\nsteps_per_update = 5\n");
         FitRunner.Start(folder.File("other.toml"), new FitRunOptions(new CollectingProgress(), null, CancellationToken.None));
         File.Copy(CheckpointFile.LatestPath(other), CheckpointFile.LatestPath(run), overwrite: true);
 
@@ -156,22 +156,11 @@ public sealed class FitReliabilityTests(SharedFitData data) : IClassFixture<Shar
             data = "{data.DataPath}"
             run_folder = "{run}"
             iterations = 4
-            checkpoint_every = 1
+            checkpoint_every_iterations = 1
             [noise]
             steps_per_update = 5
             """);
         return config;
-    }
-
-    // Requests a stop once an iteration is reported.
-    private sealed class StopAt(long iteration, CancellationTokenSource stop) : IFitProgress
-    {
-        public void IterationCompleted(IterationReport report)
-        {
-            if (report.Iteration == iteration) stop.Cancel();
-        }
-
-        public void Warning(string message) { }
     }
 
     // Puts an obstacle in place when an iteration is reported, before the checkpoint of that iteration is written.

@@ -35,14 +35,15 @@ public sealed class NoiseOnlyFitTests
             burn_in = 3
             [noise]
             steps_per_update = 60
-            foreground_fit_years = 1
+            [noise.foreground]
+            fit_years = 1
             """);
         var (outcome, _) = FitRunFixture.Fit(config);
         Assert.Equal(FitOutcomeKind.Completed, outcome.Kind);
         var samples = NoiseSamples.After(new RunFolderLayout(folder.File("run")), 3);
         // 3σ per level (false-failure rate ≈ 0.3 % each if the posterior is Gaussian and the chain has mixed).
-        NoiseSamples.AssertWithin(samples, "acc_ae", 2.5e-15);
-        NoiseSamples.AssertWithin(samples, "oms_ae", 18e-12);
-        NoiseSamples.AssertWithin(samples, "foreground_amp", 1.3);
+        NoiseSamples.AssertWithin(samples, "acceleration_asd_ae_m_s2_rthz", 2.5e-15);
+        NoiseSamples.AssertWithin(samples, "oms_asd_ae_m_rthz", 18e-12);
+        NoiseSamples.AssertWithin(samples, "foreground_amplitude_relative", 1.3);
     }
 }

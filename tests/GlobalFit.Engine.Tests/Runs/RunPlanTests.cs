@@ -14,7 +14,7 @@ public sealed class RunPlanTests(SharedFitData data) : IClassFixture<SharedFitDa
     {
         var plan = Plan("");
         string resolved = plan.ResolvedToml();
-        foreach (string key in new[] { "seed = 99", "checkpoint_minutes = ", "max_worker_failures = ", "min_confidence = ", "stages = [[\"galactic_binaries.even\"], [\"galactic_binaries.odd\"], [\"noise\"]]",
+        foreach (string key in new[] { "seed = 99", "checkpoint_every_minutes = ", "max_worker_failures = ", "min_confidence = ", "stages = [[\"galactic_binaries.even\"], [\"galactic_binaries.odd\"], [\"noise\"]]",
                      "jump_probability = ", "snr_prior_peak = ", "fit_levels = ", "level_prior_min = " })
             Assert.Contains(key, resolved, StringComparison.Ordinal);
         var again = RunPlan.FromConfig(ConfigDocument.Parse(resolved, "run.toml"), "/");

@@ -13,7 +13,7 @@ public class SampleStoreTests
     private static SampleBlock Block(string worker, long iteration)
     {
         int salt = worker.Length + (int)iteration * 7;
-        return new SampleBlock(worker, worker == "noise" ? "noise" : "galactic_binaries", iteration, ["f0_hz", "amp"],
+        return new SampleBlock(worker, worker == "noise" ? "noise" : "galactic_binaries", iteration, ["f0_hz", "amplitude"],
             [1, 2], [salt + 0.5, 1e-22, salt + 1.5, 2e-22, salt + 2.5, double.NaN], [-salt, -salt - 0.25]);
     }
 
@@ -30,7 +30,7 @@ public class SampleStoreTests
         Assert.Equal(expected.LogLikelihoods, actual.LogLikelihoods);
     }
 
-    private static string ChainFile(TemporaryRunFolder run, string worker) => run.File("chains", WorkerFileName.FromWorkerId(worker));
+    private static string ChainFile(TemporaryRunFolder run, string worker) => run.File("samples", WorkerFileName.FromWorkerId(worker));
 
     [Fact]
     public void Appended_blocks_read_back_in_iteration_then_worker_order()
@@ -46,7 +46,7 @@ public class SampleStoreTests
         Assert.Equal([1L, 2L, 3L], store.Read("noise").Select(b => b.Iteration));
         Assert.Equal(3, store.CommittedIteration);
         Assert.Equal(Workers.ToDictionary(w => w, _ => 6L), store.CountSamples());
-        Assert.True(File.Exists(run.File("chains", "galactic_binaries.0001.samples")));
+        Assert.True(File.Exists(run.File("samples", "galactic_binaries.0001.samples")));
     }
 
     [Fact]
@@ -80,7 +80,7 @@ public class SampleStoreTests
         using var run = new TemporaryRunFolder();
         var store = new SampleStore(run.Path);
         store.Append(Iteration(1));
-        string manifest = run.File("chains", "committed");
+        string manifest = run.File("samples", "committed");
         byte[] committedManifest = File.ReadAllBytes(manifest);
         store.Append(Iteration(2));
         File.WriteAllBytes(manifest, committedManifest);   // the crash came after the records, before the commit point
@@ -193,7 +193,7 @@ public class SampleStoreTests
         using var run = new TemporaryRunFolder();
         var store = new SampleStore(run.Path);
         store.Append(Iteration(1));
-        File.Delete(Path.Combine(store.ChainsFolder, "committed"));
+        File.Delete(Path.Combine(store.SamplesFolder, "committed"));
         foreach (var read in new Action[] { () => store.ReadAll().ToList(), () => store.CountSamples(), () => store.TruncateAfter(0), () => _ = store.CommittedIteration })
         {
             var error = Assert.Throws<InvalidInputException>(read);
@@ -208,7 +208,7 @@ public class SampleStoreTests
         using var run = new TemporaryRunFolder();
         var store = new SampleStore(run.Path);
         store.Append(Iteration(1));
-        Assert.True(File.Exists(Path.Combine(store.ChainsFolder, "committed")));
+        Assert.True(File.Exists(Path.Combine(store.SamplesFolder, "committed")));
         Assert.Equal(1, store.CommittedIteration);
     }
 

@@ -43,7 +43,9 @@ public class SimulationScenarioTests
     [Theory]
     [InlineData("[observation]\nduration_s = -5\n", "line 2, column 1, key 'observation.duration_s'", "positive")]
     [InlineData("[observation]\nduration_s = 100\ncadence_s = 0\n", "key 'observation.cadence_s'", "positive")]
-    [InlineData("[observation]\nduration_s = 100\ncadence_s = 10\n", "key 'observation.cadence_s'", "at least 16")]
+    [InlineData("[observation]\nduration_s = 100\ncadence_s = 10\n", "key 'observation.cadence_s'", "gives 10 points per channel; at least 16")]
+    // 6e17 s at 0.1 s: 6e18 points, said with a two-digit exponent (not .NET's 6.000E+018), before the 20-year check.
+    [InlineData("[observation]\nduration_s = 6e17\ncadence_s = 0.1\n", "key 'observation.duration_s'", "gives 6e+18 points per channel, more than")]
     [InlineData("[observation]\nduration_s = 1e6\nduration_days = 3\n", "duration_days", "not both")]
     [InlineData("[observation]\ncadence_s = 5\n", null, "'duration_s' (or 'duration_days') is missing")]
     [InlineData("[observation]\nduration_days = 3\n[noise.foreground]\nfit_years = 3\n", "key 'noise.foreground.fit_years'", "0.5, 1, 2 and 4")]
@@ -51,6 +53,11 @@ public class SimulationScenarioTests
     [InlineData("sede = 3\n[observation]\nduration_days = 3\n", "key 'sede'", "did you mean 'seed'?")]
     [InlineData("seed = -3\n[observation]\nduration_days = 3\n", "key 'seed'", "integer in [0,")]
     [InlineData("name = \"x\"\n", null, "[observation] table is required")]
+    [InlineData("[observation]\nduration_days = 7000\ncadence_s = 0.1\n", "key 'observation.duration_days'", "more than this build handles")]
+    [InlineData("[observation]\nduration_days = 8000\n", "key 'observation.duration_days'", "beyond 20 years")]
+    // 4.99e8 samples need about 93 GiB at the measured 200 bytes per sample: more than any test machine here has
+    // (this one has 24 GiB; CI machines are of the same class).
+    [InlineData("[observation]\nduration_s = 4.99e8\ncadence_s = 1\n", "key 'observation.duration_s'", "GiB to simulate")]
     public void Invalid_scenarios_are_rejected_naming_the_key(string text, string? where, string problem)
     {
         var e = Assert.Throws<InvalidInputException>(() => Parse(text));

@@ -96,8 +96,17 @@ public class ObservationFileBadInputTests
     {
         using var folder = new TempFolder();
         var tree = ObservationSamples.ValidTree();
-        tree.Attributes["format_version"] = 2;
-        BadInputAssert.Read(WriteTree(folder, tree), "/ attribute format_version", "format version 2 is not supported; this build reads version 1");
+        tree.Attributes["format_version"] = 3;
+        BadInputAssert.Read(WriteTree(folder, tree), "/ attribute format_version", "format version 3 is not supported; this build reads version 2");
+    }
+
+    [Fact]
+    public void A_file_of_format_version_one_is_refused_with_what_changed_since()
+    {
+        using var folder = new TempFolder();
+        var tree = ObservationSamples.ValidTree();
+        tree.Attributes["format_version"] = 1;
+        BadInputAssert.Read(WriteTree(folder, tree), "/ attribute format_version", "format version 1 was written by an earlier globalfit");
     }
 
     [Fact]
@@ -115,10 +124,10 @@ public class ObservationFileBadInputTests
         // h5py stores a Python int as int64; PureHDF would reinterpret its bytes if read with the wrong width.
         using var folder = new TempFolder();
         var tree = ObservationSamples.ValidTree();
-        tree.Attributes["format_version"] = 1L;
+        tree.Attributes["format_version"] = 2L;
         tree.Tdi().Attributes["dt_s"] = 5L;
         var observation = ObservationFile.Read(WriteTree(folder, tree));
-        Assert.Equal(1, observation.FormatVersion);
+        Assert.Equal(2, observation.FormatVersion);
         Assert.Equal(5.0, observation.Data.DtSeconds);
     }
 

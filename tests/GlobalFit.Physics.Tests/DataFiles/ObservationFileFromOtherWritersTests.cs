@@ -25,9 +25,9 @@ public class ObservationFileFromOtherWritersTests
         Assert.Equal([new Gap(1.9e9 + 0.5, 1.9e9 + 1.5)], observation.Gaps);
         var table = observation.FindTruth("galactic_binaries")!;
         Assert.Equal(["gb-a", "gb-b"], table.Ids);
-        Assert.Equal(["f0_hz", "amp"], table.Columns);
+        Assert.Equal(["f0_hz", "amplitude"], table.Columns);
         Assert.Equal(4.5e-3, table[1, "f0_hz"]);
-        Assert.True(double.IsNaN(table[1, "amp"]));
+        Assert.True(double.IsNaN(table[1, "amplitude"]));
     }
 
     [Fact]

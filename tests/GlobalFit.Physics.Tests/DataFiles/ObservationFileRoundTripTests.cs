@@ -91,7 +91,7 @@ public class ObservationFileRoundTripTests
 
         var summary = ObservationFile.ReadSummary(path);
 
-        Assert.Equal(1, summary.FormatVersion);
+        Assert.Equal(2, summary.FormatVersion);
         Assert.Equal("AET", summary.StoredChannels);
         Assert.Equal(64, summary.SampleCount);
         Assert.Equal(ObservationSamples.T0Seconds, summary.T0Seconds);
@@ -99,7 +99,7 @@ public class ObservationFileRoundTripTests
         Assert.Equal(64 * 5.0, summary.DurationSeconds);
         Assert.Equal(2, summary.Gaps.Count);
         Assert.Equal(72.5, summary.Gaps.TotalSeconds);
-        Assert.Equal(new Dictionary<string, int> { ["galactic_binaries"] = 2, ["massive_black_holes"] = 0 }, summary.TruthRowCounts);
+        Assert.Equal(new Dictionary<string, int> { ["galactic_binaries"] = 2, ["massive_black_hole_binaries"] = 0 }, summary.TruthRowCounts);
         Assert.Equal("globalfit 0.1.0-test", summary.Provenance.Generator);
         Assert.Equal("42", summary.Provenance.Entries["seed"]);
     }

@@ -34,8 +34,8 @@ public class ObservationModelTests
     {
         var observation = new Observation(
             ObservationSamples.Data(8), GapList.None, [ObservationSamples.EmptyMassiveBlackHoles(), ObservationSamples.GalacticBinaries()], ObservationSamples.Provenance());
-        Assert.Equal(["galactic_binaries", "massive_black_holes"], observation.Truth.Select(t => t.ClassId));
-        Assert.Null(observation.FindTruth("inspirals"));
+        Assert.Equal(["galactic_binaries", "massive_black_hole_binaries"], observation.Truth.Select(t => t.ClassId));
+        Assert.Null(observation.FindTruth("extreme_mass_ratio_inspirals"));
     }
 
     [Theory]
@@ -52,15 +52,15 @@ public class ObservationModelTests
     [Fact]
     public void Truth_table_refuses_a_value_count_that_does_not_fill_the_rows()
     {
-        var error = Assert.Throws<ArgumentException>(() => new TruthTable("galactic_binaries", ["f0_hz", "amp"], ["a", "b"], [1, 2, 3]));
+        var error = Assert.Throws<ArgumentException>(() => new TruthTable("galactic_binaries", ["f0_hz", "amplitude"], ["a", "b"], [1, 2, 3]));
         Assert.Contains("2 rows × 2 columns need 4 values, got 3", error.Message);
     }
 
     [Fact]
     public void Truth_table_refuses_repeated_column_names_and_empty_ids()
     {
-        Assert.Throws<ArgumentException>(() => new TruthTable("galactic_binaries", ["amp", "amp"], ["a"], [1, 2]));
-        Assert.Throws<ArgumentException>(() => new TruthTable("galactic_binaries", ["amp"], [""], [1]));
+        Assert.Throws<ArgumentException>(() => new TruthTable("galactic_binaries", ["amplitude", "amplitude"], ["a"], [1, 2]));
+        Assert.Throws<ArgumentException>(() => new TruthTable("galactic_binaries", ["amplitude"], [""], [1]));
         Assert.Throws<ArgumentException>(() => new TruthTable("galactic_binaries", [], [], []));
     }
 

@@ -28,14 +28,14 @@ internal static class ObservationSamples
 
     public static TruthTable GalacticBinaries() => new(
         "galactic_binaries",
-        ["f0_hz", "fdot_hz_s", "amp", "beta_rad", "lambda_rad", "iota_rad", "psi_rad", "phi0_rad", "snr"],
+        ["f0_hz", "fdot_hz_s", "amplitude", "beta_rad", "lambda_rad", "iota_rad", "psi_rad", "phi0_rad", "snr"],
         ["gb-0001", "gb-0002"],
         [
             3.1e-3, 1.2e-17, 2.5e-22, 0.3, 1.7, 0.9, 0.4, 2.2, 15.5,
             4.7e-3, -3e-18, 7.0e-23, -0.8, 5.9, 2.1, 1.3, 0.1, double.NaN,
         ]);
 
-    public static TruthTable EmptyMassiveBlackHoles() => new("massive_black_holes", ["mchirp_msun", "q", "snr"], [], []);
+    public static TruthTable EmptyMassiveBlackHoles() => new("massive_black_hole_binaries", ["mchirp_msun", "q", "snr"], [], []);
 
     public static ObservationProvenance Provenance() => new(
         "globalfit 0.1.0-test",
@@ -74,7 +74,7 @@ internal static class ObservationSamples
         {
             Attributes =
             {
-                ["format_version"] = 1,
+                ["format_version"] = 2,
                 ["created_utc"] = "2026-12-01T22:05:07Z",
                 ["generator"] = "hand-built test tree",
             },

@@ -64,7 +64,7 @@ public sealed class QuadrupoleBinaryTests
     public void Parameter_columns_use_the_project_names_and_validation_names_the_column()
     {
         // Source: the project's parameter names (DEVELOPERS.md, "Conventions that everything relies on").
-        Assert.Equal(new[] { "f0_hz", "fdot_hz_s", "amp", "beta_rad", "lambda_rad", "iota_rad", "psi_rad", "phi0_rad" },
+        Assert.Equal(new[] { "f0_hz", "fdot_hz_s", "amplitude", "beta_rad", "lambda_rad", "iota_rad", "psi_rad", "phi0_rad" },
             GalacticBinaryParameters.ColumnNames.ToArray());
         var bad = new GalacticBinaryParameters(1e-3, 0, 1e-22, 2.0, 0, 0, 0, 0);
         var error = Assert.Throws<ArgumentOutOfRangeException>(() => bad.Validate());

@@ -81,8 +81,18 @@ public sealed class ExtremeMassRatioInspiralSimulation : ISimulatedSourceClass
         }
         else
         {
-            plunge = t.GetPositive(P.PlungeTimeColumn, 1e7);
-            nu0 = new InspiralTrajectory().FrequencyForPlungeTime(equations, [0, 0, 0, e0, 0], plunge.Value);
+            // Up to 1e10 s (about 300 years): a later plunge starts below the band a mission of years can use, and its
+            // trajectory would not fit the integrator's store.
+            plunge = t.GetInRange(P.PlungeTimeColumn, 1e7, 1, 1e10);
+            try
+            {
+                nu0 = new InspiralTrajectory().FrequencyForPlungeTime(equations, [0, 0, 0, e0, 0], plunge.Value);
+            }
+            catch (ArgumentOutOfRangeException error)
+            {
+                // A plunge so far off that no starting frequency of these masses reaches it (the search runs out of range).
+                throw t.Invalid(P.PlungeTimeColumn, $"no orbit of these masses and eccentricity plunges after {plunge.Value} s ({error.Message})");
+            }
         }
         t.RejectUnknownKeys(["id", .. P.ColumnNames, P.PlungeTimeColumn]);
         var parameters = new P(m, mu, chi, nu0, e0, inclination, beta, lambda, spinTheta, spinPhi, distance, phi0, gamma0, alpha0);

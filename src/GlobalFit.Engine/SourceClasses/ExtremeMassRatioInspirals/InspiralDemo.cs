@@ -1,13 +1,8 @@
-using System.Globalization;
-using GlobalFit.Engine.Fitting;
-using GlobalFit.Physics.DataFiles;
-using P = GlobalFit.Physics.ExtremeMassRatioInspirals.ExtremeMassRatioInspiralParameters;
-
 namespace GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
 
-/// <summary>The inspiral of the built-in demo: one invented source (SNR 32 over the demo's month and noise), fitted from a start row
-/// a posterior width or two off its truth (as a catalogue row of an earlier, shorter analysis would be), and the comparison of its catalogue row
-/// with the truth.</summary>
+/// <summary>The inspiral of the built-in demo: one invented source (SNR 32 over the demo's month and noise), fitted from
+/// a start row a posterior width or two off its truth (as a catalogue row of an earlier, shorter analysis would be);
+/// <c>compare</c> reports it against the truth with <see cref="InspiralMatcher"/>.</summary>
 internal sealed class InspiralDemo : IDemoPart
 {
     public string ScenarioToml => """
@@ -54,35 +49,4 @@ internal sealed class InspiralDemo : IDemoPart
         gamma0_rad = 0.5
         alpha0_rad = 2.5
         """;
-
-    public void Report(TextWriter output, IFitSourceClassPlan plan, double dfHz, IReadOnlyList<CatalogueRecord> sources, TruthTable? truth)
-    {
-        ArgumentNullException.ThrowIfNull(output);
-        ArgumentNullException.ThrowIfNull(sources);
-        if (truth is null)
-        {
-            output.WriteLine($"demo: inspirals: {sources.Count} catalogued; the data hold no truth table to compare with");
-            return;
-        }
-        foreach (var row in sources)
-        {
-            int t = truth.Ids.ToList().IndexOf("demo-emri");
-            if (t < 0) continue;
-            int inside = 0;
-            var text = new System.Text.StringBuilder();
-            for (int c = 0; c < row.ParameterNames.Length; c++)
-            {
-                string name = row.ParameterNames[c];
-                double value = truth[t, name];
-                bool periodic = InspiralSamplingCoordinates.IsPeriodic(c);
-                double shifted = periodic ? row.Median[c] + Math.IEEERemainder(value - row.Median[c], 2 * Math.PI) : value;
-                if (shifted >= row.Lower[c] && shifted <= row.Upper[c]) inside++;
-                double sigma = (row.Upper[c] - row.Lower[c]) / (2 * 1.6448536269514722);
-                text.Append(CultureInfo.InvariantCulture, $" {name} {(sigma > 0 ? (row.Median[c] - shifted) / sigma : 0):+0.0;-0.0;0.0}");
-            }
-            output.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"demo: inspiral {row.Id}: SNR injected {truth[t, "snr"]:F1}, fitted {row.Snr:F1}; truth inside the 90 % interval of {inside} of {row.ParameterNames.Length} parameters"));
-            output.WriteLine("  median - truth in posterior sigma:" + text);
-        }
-    }
 }

@@ -126,6 +126,9 @@ internal sealed class InspiralFitPlan : IFitSourceClassPlan
     public IClassCatalogue CreateCatalogue(IPsdSource noise, long burnInIterations, double minimumConfidence) =>
         new InspiralCatalogue(Generator(_shape), noise, burnInIterations, [.. Settings.Starts.Select(s => WorkerId(s.Id))]);
 
+    /// <summary>Inspiral rows matched by template overlap (<see cref="InspiralMatcher"/>).</summary>
+    public ISourceMatcher CreateMatcher(IPsdSource noise) => new InspiralMatcher(Generator(_shape), noise, _windows);
+
     /// <inheritdoc />
     public void WriteResolved(ResolvedConfigWriter writer)
     {

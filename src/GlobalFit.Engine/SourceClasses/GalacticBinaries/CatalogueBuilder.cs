@@ -5,7 +5,7 @@ using GlobalFit.Physics.Series;
 
 namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 
-/// <summary>Turns cold-chain samples of variable-size source lists into catalogue entries: sources of different samples
+/// <summary>Turns cold-chain samples of variable-size source lists into catalogue sources: sources of different samples
 /// that are the same signal are associated by the noise-weighted overlap of their templates.</summary>
 /// <remarks>
 /// <para>Association: each new sample source is compared with the reference template of every entry (the template of
@@ -18,7 +18,7 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// fluctuations seldom overlap a real source that well. Feed samples after burn-in: a poor first member makes a poor
 /// reference.</para>
 /// <para>Confidence is the fraction of samples in which the entry appears (the posterior probability that the source is
-/// in the model). Deterministic: entries are built in sample order and reported by median f0. Not thread-safe.</para>
+/// in the model). Deterministic: sources are built in sample order and reported by median f0. Not thread-safe.</para>
 /// </remarks>
 public sealed class CatalogueBuilder
 {
@@ -104,7 +104,7 @@ public sealed class CatalogueBuilder
         }
     }
 
-    /// <summary>The entries so far, by median f0.</summary>
+    /// <summary>The sources so far, by median f0.</summary>
     /// <param name="minimumConfidence">Entries below this confidence are left out; default 0 (all).</param>
     /// <param name="minimumSnr">Entries whose median SNR lies below this are left out; default 0 (all).</param>
     public ImmutableArray<CatalogueEntry> Build(double minimumConfidence = 0.0, double minimumSnr = 0.0) =>
@@ -121,7 +121,8 @@ public sealed class CatalogueBuilder
             Quantile(members.Select(m => Wrap(m.EclipticLongitudeRad, 2 * Math.PI)), quantile),
             Quantile(members.Select(m => m.InclinationRad), quantile),
             Quantile(members.Select(m => Wrap(m.PolarisationRad, Math.PI)), quantile),
-            Quantile(members.Select(m => Wrap(m.InitialPhaseRad, 2 * Math.PI)), quantile));
+            Quantile(members.Select(m => Wrap(m.InitialPhaseRad, 2 * Math.PI)), quantile),
+            Quantile(members.Select(m => m.SecondFrequencyDerivativeHzS2), quantile));
         return new CatalogueEntry((double)members.Count / _sampleCount, members.Count, At(0.5), At(0.05), At(0.95), Quantile(entry.Snrs, 0.5), [.. members]);
     }
 

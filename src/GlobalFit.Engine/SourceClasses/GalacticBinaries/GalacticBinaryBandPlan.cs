@@ -8,7 +8,7 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// <remarks>
 /// <para>The range [f_min, f_max] is rounded outwards to whole bins and cut into cores of <c>window_bins</c> bins; the
 /// last core takes the remainder (so it holds between one and two window widths). Each core is padded by
-/// <c>padding_bins</c> on both sides. A source's template spans N bins centred on its carrier bin
+/// <c>margin_bins</c> on both sides. A source's template spans N bins centred on its carrier bin
 /// (<see cref="GalacticBinaryTemplateGenerator.TemplateBins"/>), so padding ≥ N/2 keeps the template of every source the
 /// core owns inside the padded window; the spare padding − N/2 bins (at most half a core) become the drift margin of
 /// <see cref="GalacticBinaryBandWindow.SourceRange"/>. Cores at least N wide keep the templates of two same-stage
@@ -58,7 +58,7 @@ public sealed class GalacticBinaryBandPlan
     /// <param name="generator">The record's template generator.</param>
     /// <returns>The plan.</returns>
     /// <exception cref="ArgumentException">A setting is inconsistent with itself or with the record; the parameter name
-    /// is the configuration key (<c>f_max_hz</c>, <c>window_bins</c>, <c>padding_bins</c>, …).</exception>
+    /// is the configuration key (<c>f_max_hz</c>, <c>window_bins</c>, <c>margin_bins</c>, …).</exception>
     public static GalacticBinaryBandPlan Create(GalacticBinaryBandSettings settings, GalacticBinaryTemplateGenerator generator)
     {
         ArgumentNullException.ThrowIfNull(settings);
@@ -79,23 +79,23 @@ public sealed class GalacticBinaryBandPlan
             throw new ArgumentException($"must lie below the Nyquist frequency {nyquistBin * df} Hz of the data", "f_max_hz");
         int firstBin = (int)Math.Floor(settings.MinFrequencyHz / df);
         int endBin = (int)Math.Ceiling(settings.MaxFrequencyHz / df);
-        if (endBin + settings.PaddingBins > nyquistBin)
-            throw new ArgumentException($"with {settings.PaddingBins} padding bins the last window reaches above the Nyquist frequency {nyquistBin * df} Hz", "f_max_hz");
-        if (firstBin - settings.PaddingBins < 1)
-            throw new ArgumentException($"with {settings.PaddingBins} padding bins the first window reaches below the first bin above DC", "f_min_hz");
+        if (endBin + settings.MarginBins > nyquistBin)
+            throw new ArgumentException($"with {settings.MarginBins} padding bins the last window reaches above the Nyquist frequency {nyquistBin * df} Hz", "f_max_hz");
+        if (firstBin - settings.MarginBins < 1)
+            throw new ArgumentException($"with {settings.MarginBins} padding bins the first window reaches below the first bin above DC", "f_min_hz");
         int totalBins = endBin - firstBin;
         if (settings.WindowBins > totalBins)
             throw new ArgumentException($"window of {settings.WindowBins} bins is wider than the band's {totalBins} bins", "window_bins");
         int templateBins = Math.Max(
             generator.EnvelopeLength(settings.MaxFrequencyHz, settings.MaxFrequencyDerivativeHzS),
             generator.EnvelopeLength(settings.MaxFrequencyHz, settings.MinFrequencyDerivativeHzS));
-        if (settings.PaddingBins < templateBins / 2)
-            throw new ArgumentException($"{settings.PaddingBins} bins cannot hold half a template ({templateBins / 2} of its {templateBins} bins at f_max_hz)", "padding_bins");
+        if (settings.MarginBins < templateBins / 2)
+            throw new ArgumentException($"{settings.MarginBins} bins cannot hold half a template ({templateBins / 2} of its {templateBins} bins at f_max_hz)", "margin_bins");
         if (settings.WindowBins < templateBins)
             throw new ArgumentException($"{settings.WindowBins} bins is narrower than one template ({templateBins} bins), so windows of one stage would share data", "window_bins");
         int count = totalBins / settings.WindowBins;
         // Drift margin: at most half a core, so a drifted source always lands in the neighbour's core.
-        int drift = Math.Min(settings.PaddingBins - templateBins / 2, settings.WindowBins / 2);
+        int drift = Math.Min(settings.MarginBins - templateBins / 2, settings.WindowBins / 2);
         var windows = ImmutableArray.CreateBuilder<GalacticBinaryBandWindow>(count);
         for (int i = 0; i < count; i++)
         {
@@ -105,7 +105,7 @@ public sealed class GalacticBinaryBandPlan
             int sourceFirst = i == 0 ? first : first - drift;
             int sourceEnd = i == count - 1 ? end : end + drift;
             windows.Add(new GalacticBinaryBandWindow(i, i % 2, core, new BinWindow(sourceFirst, sourceEnd - sourceFirst),
-                new BinWindow(first - settings.PaddingBins, end - first + 2 * settings.PaddingBins), df));
+                new BinWindow(first - settings.MarginBins, end - first + 2 * settings.MarginBins), df));
         }
         return new GalacticBinaryBandPlan(windows.MoveToImmutable(), templateBins, df, settings.WindowBins);
     }

@@ -13,7 +13,7 @@ public sealed record GalacticBinaryBandSettings
     /// <summary>Configuration keys of the table.</summary>
     public static readonly string[] Keys =
     [
-        "f_min_hz", "f_max_hz", "window_bins", "padding_bins", "max_sources_per_window", "fdot_min_hz_s", "fdot_max_hz_s",
+        "f_min_hz", "f_max_hz", "window_bins", "margin_bins", "max_sources_per_window", "fdot_min_hz_s", "fdot_max_hz_s",
         "steps_per_update", "temperatures", "chains_per_temperature", "max_temperature", "jump_probability",
         "snr_prior_peak", "snr_max", "include_t", "fstat_cells_per_bin", "fstat_latitude_cells", "fstat_longitude_cells",
         "fisher_refresh_steps", "sample_interval", "split_merge_probability", "split_merge_bins", "catalogue_min_snr",
@@ -31,8 +31,8 @@ public sealed record GalacticBinaryBandSettings
     /// <value>Frequency bins of the record.</value>
     public int WindowBins { get; init; } = 256;
 
-    /// <summary>Bins added on each side of a core so that the templates of its sources fit [<c>padding_bins</c>].</summary>
-    public int PaddingBins { get; init; } = 64;
+    /// <summary>Bins added on each side of a core so that the templates of its sources fit [<c>margin_bins</c>].</summary>
+    public int MarginBins { get; init; } = 64;
 
     /// <summary>Cap on the number of sources one window's sampler holds [<c>max_sources_per_window</c>].</summary>
     public int MaxSourcesPerWindow { get; init; } = 20;
@@ -68,8 +68,8 @@ public sealed record GalacticBinaryBandSettings
     /// <value>Frequency bins of the record.</value>
     public double SplitMergeBins { get; init; } = 4.0;
 
-    /// <summary>Catalogue entries whose median optimal SNR lies below this are left out [<c>catalogue_min_snr</c>].</summary>
-    /// <remarks>Default 5, common practice rather than a derived value: below it the sampler's confident entries are
+    /// <summary>Catalogue sources whose median optimal SNR lies below this are left out [<c>catalogue_min_snr</c>].</summary>
+    /// <remarks>Default 5, common practice rather than a derived value: below it the sampler's confident sources are
     /// mostly blends of several weak binaries or noise fluctuations that match no single source, so a catalogue is
     /// thresholded there (0 keeps everything).</remarks>
     public double CatalogueMinSnr { get; init; } = 5.0;
@@ -114,7 +114,7 @@ public sealed record GalacticBinaryBandSettings
             MinFrequencyHz = table.GetPositive("f_min_hz", defaults.MinFrequencyHz),
             MaxFrequencyHz = table.GetPositive("f_max_hz", defaults.MaxFrequencyHz),
             WindowBins = (int)table.GetInteger("window_bins", defaults.WindowBins, 1, 1 << 24),
-            PaddingBins = (int)table.GetInteger("padding_bins", defaults.PaddingBins, 0, 1 << 20),
+            MarginBins = (int)table.GetInteger("margin_bins", defaults.MarginBins, 0, 1 << 20),
             MaxSourcesPerWindow = (int)table.GetInteger("max_sources_per_window", defaults.MaxSourcesPerWindow, 1, 1000),
             MinFrequencyDerivativeHzS = table.GetInRange("fdot_min_hz_s", defaults.MinFrequencyDerivativeHzS, -1e-10, 1e-10),
             MaxFrequencyDerivativeHzS = table.GetInRange("fdot_max_hz_s", defaults.MaxFrequencyDerivativeHzS, -1e-10, 1e-10),

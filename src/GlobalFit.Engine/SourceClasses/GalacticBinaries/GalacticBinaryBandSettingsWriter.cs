@@ -16,7 +16,7 @@ public static class GalacticBinaryBandSettingsWriter
         writer.Key("f_min_hz", settings.MinFrequencyHz);
         writer.Key("f_max_hz", settings.MaxFrequencyHz);
         writer.Key("window_bins", settings.WindowBins);
-        writer.Key("padding_bins", settings.PaddingBins);
+        writer.Key("margin_bins", settings.MarginBins);
         writer.Key("max_sources_per_window", settings.MaxSourcesPerWindow);
         writer.Key("fdot_min_hz_s", settings.MinFrequencyDerivativeHzS);
         writer.Key("fdot_max_hz_s", settings.MaxFrequencyDerivativeHzS);

@@ -11,7 +11,7 @@ internal static class GalacticBinaryBench
     public static IEnumerable<BenchFigure> Run()
     {
         var m = GalacticBinaryTemplateProbe.Measure();
-        yield return new BenchFigure("gb_template_likelihoods_per_s", m.LikelihoodsPerSecond, $"galactic-binary template + band log-likelihood per second, one core (1 yr at 5 s, N = {m.EnvelopeLength})");
-        yield return new BenchFigure("gb_speedup_over_slow_response", m.SpeedupOverBruteForce, "same source: slow time-domain reference response time / fast template time");
+        yield return new BenchFigure("galactic_binary_template_likelihoods_per_s", m.LikelihoodsPerSecond, $"galactic-binary template + band log-likelihood per second, one core (1 yr at 5 s, N = {m.EnvelopeLength})");
+        yield return new BenchFigure("galactic_binary_speedup_over_slow_response", m.SpeedupOverBruteForce, "same source: slow time-domain reference response time / fast template time");
     }
 }

@@ -98,21 +98,22 @@ public sealed class GalacticBinaryClassCatalogue : IClassCatalogue
         }
     }
 
-    /// <summary>The entries of all workers, by median f0, numbered from <c>gb-0001</c>.</summary>
-    /// <returns>The records; parameters are the eight columns of <see cref="GalacticBinaryParameters.ColumnNames"/>.</returns>
+    /// <summary>The sources of all workers, by median f0, numbered from <c>gb-0001</c>.</summary>
+    /// <returns>The records; parameters are the nine columns of <see cref="GalacticBinaryParameters.TableColumnNames"/>, the
+    /// order of the truth table (f̈ is what the samples hold: 0 while the fit keeps it fixed).</returns>
     public ImmutableArray<CatalogueRecord> Build()
     {
-        var entries = _builders.Values.SelectMany(b => b.Build(MinimumConfidence, MinimumSnr)).OrderBy(e => e.Median.FrequencyHz).ToList();
-        int digits = Math.Max(4, entries.Count.ToString(CultureInfo.InvariantCulture).Length);
-        var records = ImmutableArray.CreateBuilder<CatalogueRecord>(entries.Count);
-        for (int i = 0; i < entries.Count; i++)
+        var rows = _builders.Values.SelectMany(b => b.Build(MinimumConfidence, MinimumSnr)).OrderBy(e => e.Median.FrequencyHz).ToList();
+        int digits = Math.Max(4, rows.Count.ToString(CultureInfo.InvariantCulture).Length);
+        var records = ImmutableArray.CreateBuilder<CatalogueRecord>(rows.Count);
+        for (int i = 0; i < rows.Count; i++)
         {
-            var entry = entries[i];
+            var entry = rows[i];
             string id = IdPrefix + (i + 1).ToString(CultureInfo.InvariantCulture).PadLeft(digits, '0');
-            var samples = ImmutableArray.CreateBuilder<double>(entry.Members.Length * ColumnMap.Width);
-            foreach (var member in entry.Members) samples.AddRange(member.ToRow());
-            records.Add(new CatalogueRecord(id, ClassId, entry.Confidence, entry.MedianSnr, GalacticBinaryParameters.ColumnNames,
-                [.. entry.Median.ToRow()], [.. entry.Lower.ToRow()], [.. entry.Upper.ToRow()], samples.MoveToImmutable()));
+            var samples = ImmutableArray.CreateBuilder<double>(entry.Members.Length * GalacticBinaryParameters.TableColumnNames.Length);
+            foreach (var member in entry.Members) samples.AddRange(member.ToTableRow());
+            records.Add(new CatalogueRecord(id, ClassId, entry.Confidence, entry.MedianSnr, GalacticBinaryParameters.TableColumnNames,
+                [.. entry.Median.ToTableRow()], [.. entry.Lower.ToTableRow()], [.. entry.Upper.ToTableRow()], samples.MoveToImmutable()));
         }
         return records.MoveToImmutable();
     }

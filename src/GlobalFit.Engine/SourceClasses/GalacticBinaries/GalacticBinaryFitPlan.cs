@@ -58,6 +58,14 @@ internal sealed class GalacticBinaryFitPlan : IFitSourceClassPlan
             noise, burnInIterations, minimumConfidence, minimumSnr: _settings.CatalogueMinSnr);
     }
 
+    public ISourceMatcher CreateMatcher(IPsdSource noise)
+    {
+        var first = _plan.Windows[0];
+        var last = _plan.Windows[^1];
+        return new GalacticBinaryMatcher(_prototype.WithOwnBuffers(), new BinWindow(first.Padded.First, last.Padded.End - first.Padded.First),
+            first.CoreStartHz, last.CoreEndHz, noise);
+    }
+
     public void WriteResolved(ResolvedConfigWriter writer) => GalacticBinaryBandSettingsWriter.Write(_settings, writer);
 
     internal static string WorkerIdOf(int windowIndex) => Prefix + windowIndex.ToString("D4", CultureInfo.InvariantCulture);

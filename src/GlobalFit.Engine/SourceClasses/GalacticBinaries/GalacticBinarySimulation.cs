@@ -52,7 +52,7 @@ public sealed class GalacticBinarySimulation : ISimulatedSourceClass
         double fdot = t.GetDouble(GalacticBinaryParameters.FrequencyDerivativeColumn, 0.0);
         if (!double.IsFinite(fdot)) throw t.Invalid(GalacticBinaryParameters.FrequencyDerivativeColumn, "must be finite");
         if (!t.Has(GalacticBinaryParameters.AmplitudeColumn)) throw t.InvalidTable($"each binary needs '{GalacticBinaryParameters.AmplitudeColumn}'");
-        double amp = t.GetPositive(GalacticBinaryParameters.AmplitudeColumn, 1e-22);
+        double amplitude = t.GetPositive(GalacticBinaryParameters.AmplitudeColumn, 1e-22);
         double beta = t.GetInRange(GalacticBinaryParameters.EclipticLatitudeColumn, 0.0, -Math.PI / 2, Math.PI / 2);
         double lambda = t.GetInRange(GalacticBinaryParameters.EclipticLongitudeColumn, 0.0, 0, 2 * Math.PI);
         double iota = t.GetInRange(GalacticBinaryParameters.InclinationColumn, 0.0, 0, Math.PI);
@@ -61,7 +61,7 @@ public sealed class GalacticBinarySimulation : ISimulatedSourceClass
         double fddot = t.GetDouble(GalacticBinaryParameters.SecondFrequencyDerivativeColumn, 0.0);
         if (!double.IsFinite(fddot)) throw t.Invalid(GalacticBinaryParameters.SecondFrequencyDerivativeColumn, "must be finite");
         t.RejectUnknownKeys(["id", .. GalacticBinaryParameters.ColumnNames, GalacticBinaryParameters.SecondFrequencyDerivativeColumn]);
-        return (id, new GalacticBinaryParameters(f0, fdot, amp, beta, lambda, iota, psi, phi0, fddot));
+        return (id, new GalacticBinaryParameters(f0, fdot, amplitude, beta, lambda, iota, psi, phi0, fddot));
     }
 
     private sealed class Injection(GalacticPopulationSettings? population, IReadOnlyList<(string Id, GalacticBinaryParameters Parameters)> explicitBinaries)
@@ -97,7 +97,7 @@ public sealed class GalacticBinarySimulation : ISimulatedSourceClass
                     id = {TomlText.String(id)}
                     f0_hz = {TomlText.Number(b.FrequencyHz)}
                     fdot_hz_s = {TomlText.Number(b.FrequencyDerivativeHzS)}
-                    amp = {TomlText.Number(b.Amplitude)}
+                    amplitude = {TomlText.Number(b.Amplitude)}
                     beta_rad = {TomlText.Number(b.EclipticLatitudeRad)}
                     lambda_rad = {TomlText.Number(b.EclipticLongitudeRad)}
                     iota_rad = {TomlText.Number(b.InclinationRad)}
@@ -123,13 +123,13 @@ public sealed class GalacticBinarySimulation : ISimulatedSourceClass
                 context.Observation.SampleCount * context.Observation.CadenceS, context.Observation.CadenceS,
                 startSeconds: context.Observation.StartS);
             var whole = new BinWindow(0, a.Length);
-            string[] columns = [.. GalacticBinaryParameters.ColumnNames, GalacticBinaryParameters.SecondFrequencyDerivativeColumn, "snr"];
+            string[] columns = [.. GalacticBinaryParameters.TableColumnNames, "snr"];
             var values = new double[sources.Count * columns.Length];
             for (int i = 0; i < sources.Count; i++)
             {
                 var s = sources[i].Parameters;
                 generator.AddResponse(s, whole, a, e, t);
-                double[] row = [.. s.ToRow(), s.SecondFrequencyDerivativeHzS2, GalacticBinarySnr.Optimal(generator, s, context.Noise)];
+                double[] row = [.. s.ToTableRow(), GalacticBinarySnr.Optimal(generator, s, context.Noise)];
                 row.CopyTo(values, i * columns.Length);
             }
             return new TruthTable(Id, columns, sources.Select(x => x.Id), values);

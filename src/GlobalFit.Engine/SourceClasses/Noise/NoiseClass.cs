@@ -23,7 +23,7 @@ public sealed class NoiseClass : ISourceClass
 
     /// <summary>Every column a noise sample may hold; a run holds those its settings fit (see
     /// <see cref="NoiseParameterLayout"/>).</summary>
-    public ImmutableArray<string> ParameterColumns { get; } = ["acc_ae", "oms_ae", "acc_t", "oms_t", "foreground_amp"];
+    public ImmutableArray<string> ParameterColumns { get; } = ["acceleration_asd_ae_m_s2_rthz", "oms_asd_ae_m_rthz", "acceleration_asd_t_m_s2_rthz", "oms_asd_t_m_rthz", "foreground_amplitude_relative"];
 
     /// <inheritdoc />
     public ISimulatedSourceClass? Simulation => null;

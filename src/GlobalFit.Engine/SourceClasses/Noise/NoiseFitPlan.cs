@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Globalization;
 using GlobalFit.Engine.Configuration;
 using GlobalFit.Engine.Fitting;
 
@@ -37,21 +38,21 @@ internal sealed class NoiseFitPlan : IFitSourceClassPlan
         return NoiseWorker.Restore(_settings, _shape, state);
     }
 
-    /// <summary>The noise posterior is not a list of sources: its samples stay in the sample store, and the source
-    /// catalogue gets no rows from it.</summary>
-    public IClassCatalogue CreateCatalogue(IPsdSource noise, long burnInIterations, double minimumConfidence) => new NoRows();
+    /// <summary>The noise posterior as one catalogue row, <c>noise</c>: medians, 90 % intervals and samples of the levels
+    /// and the foreground amplitude (confidence 1, SNR NaN).</summary>
+    public IClassCatalogue CreateCatalogue(IPsdSource noise, long burnInIterations, double minimumConfidence) => new NoiseCatalogue(burnInIterations);
 
     public void WriteResolved(ResolvedConfigWriter writer) => _settings.WriteResolved(writer);
+
+    public IEnumerable<string> Describe() =>
+    [
+        _settings.Foreground
+            ? string.Create(CultureInfo.InvariantCulture, $"noise model: confusion foreground of the {_settings.ForegroundFitYears}-year fit ({_settings.ForegroundFitYearsOrigin}), amplitude starting at {_settings.ForegroundAmplitude}")
+            : "noise model: no confusion foreground ([noise.foreground] enabled = false)",
+    ];
 
     private static void CheckId(string workerId)
     {
         if (workerId != NoiseClass.Id) throw new ArgumentException($"the noise module has one worker, '{NoiseClass.Id}', not '{workerId}'", nameof(workerId));
-    }
-
-    private sealed class NoRows : IClassCatalogue
-    {
-        public void Add(SampleBlock block) { }
-
-        public ImmutableArray<CatalogueRecord> Build() => [];
     }
 }

@@ -18,13 +18,16 @@ namespace GlobalFit.Engine.SourceClasses.Noise;
 /// </remarks>
 public sealed record NoiseFitSettings
 {
-    /// <summary>Configuration keys of the table.</summary>
+    /// <summary>Configuration keys of the table (<c>foreground</c> is the <c>[noise.foreground]</c> sub-table).</summary>
     public static readonly string[] Keys =
     [
-        "fit_levels", "foreground", "foreground_fit_years", "acceleration_asd", "oms_asd", "foreground_amplitude",
+        "fit_levels", "foreground", "acceleration_asd", "oms_asd",
         "f_min_hz", "f_max_hz", "include_t", "steps_per_update", "temperatures", "max_temperature", "sample_interval",
-        "level_prior_min", "level_prior_max", "foreground_amplitude_max",
+        "level_prior_min", "level_prior_max",
     ];
+
+    /// <summary>Keys of <c>[noise.foreground]</c>: the names a scenario uses for the same quantities, plus the prior's edge.</summary>
+    public static readonly string[] ForegroundKeys = ["enabled", "fit_years", "amplitude", "amplitude_max"];
 
     /// <summary>Upper edge of the default analysed range when the record's Nyquist frequency allows it.</summary>
     public const double DefaultMaxFrequencyHz = 0.03;
@@ -32,12 +35,16 @@ public sealed record NoiseFitSettings
     /// <summary>Whether the levels are sampled [<c>fit_levels</c>]; when false they stay at the starting values.</summary>
     public bool FitLevels { get; init; } = true;
 
-    /// <summary>Whether the model includes the Galactic confusion foreground in A and E [<c>foreground</c>].</summary>
+    /// <summary>Whether the model includes the Galactic confusion foreground in A and E [<c>foreground.enabled</c>].</summary>
     public bool Foreground { get; init; } = true;
 
-    /// <summary>Which tabulated foreground shape to use [<c>foreground_fit_years</c>].</summary>
-    /// <value>Years: 0.5, 1, 2 or 4; the default is the value nearest the record's duration.</value>
+    /// <summary>Which tabulated foreground shape to use [<c>foreground.fit_years</c>].</summary>
+    /// <value>Years: 0.5, 1, 2 or 4; the default is the one of the scenario the observation file records it was simulated
+    /// with, else the value nearest the record's duration (<see cref="ForegroundFitYearsOrigin"/> says which).</value>
     public double ForegroundFitYears { get; init; } = 1.0;
+
+    /// <summary>Where <see cref="ForegroundFitYears"/> came from, in words, for <c>fit</c> and <c>inspect</c> to say.</summary>
+    public string ForegroundFitYearsOrigin { get; init; } = "set in the run configuration";
 
     /// <summary>Starting (or fixed) test-mass acceleration ASD of both channel groups [<c>acceleration_asd</c>].</summary>
     /// <value>m s⁻² Hz^-1/2.</value>
@@ -48,7 +55,7 @@ public sealed record NoiseFitSettings
     public double OmsAsd { get; init; } = InstrumentNoiseSettings.DefaultOmsAsd;
 
     /// <summary>Starting (or fixed) foreground amplitude, a multiplier of the published fit's PSD
-    /// [<c>foreground_amplitude</c>].</summary>
+    /// [<c>foreground.amplitude</c>].</summary>
     public double ForegroundAmplitude { get; init; } = 1.0;
 
     /// <summary>Lower edge of the fitted range [<c>f_min_hz</c>].</summary>
@@ -81,7 +88,7 @@ public sealed record NoiseFitSettings
     /// <summary>Upper edge of each level's uniform prior, as a multiple of its starting ASD [<c>level_prior_max</c>].</summary>
     public double LevelPriorMax { get; init; } = 10.0;
 
-    /// <summary>Upper edge of the foreground amplitude's uniform prior on [0, max] [<c>foreground_amplitude_max</c>].</summary>
+    /// <summary>Upper edge of the foreground amplitude's uniform prior on [0, max] [<c>foreground.amplitude_max</c>].</summary>
     public double ForegroundAmplitudeMax { get; init; } = 10.0;
 
     /// <summary>The π f* frequency where the A/E/T transfer functions first vanish; the fit must stay below it.</summary>
@@ -100,14 +107,20 @@ public sealed record NoiseFitSettings
         ArgumentNullException.ThrowIfNull(shape);
         var defaults = new NoiseFitSettings();
         double defaultMax = Math.Min(0.9 * shape.NyquistHz, DefaultMaxFrequencyHz);
+        var foreground = table.GetTable("foreground") ?? ConfigDocument.Parse("[foreground]\n", table.SourceName).GetTable("foreground")!;
+        var (defaultYears, origin) = shape.ScenarioForegroundFitYears is { } recorded
+            ? (recorded, "from the scenario recorded in the observation file")
+            : (NearestFitYears(shape.DurationS), "nearest the record's length (the observation file records no scenario with a foreground)");
+        if (foreground.Has("fit_years")) origin = "set in the run configuration";
         var settings = new NoiseFitSettings
         {
             FitLevels = table.GetBool("fit_levels", defaults.FitLevels),
-            Foreground = table.GetBool("foreground", defaults.Foreground),
-            ForegroundFitYears = table.GetDouble("foreground_fit_years", NearestFitYears(shape.DurationS)),
+            Foreground = foreground.GetBool("enabled", defaults.Foreground),
+            ForegroundFitYears = foreground.GetDouble("fit_years", defaultYears),
+            ForegroundFitYearsOrigin = origin,
             AccelerationAsd = table.GetPositive("acceleration_asd", defaults.AccelerationAsd),
             OmsAsd = table.GetPositive("oms_asd", defaults.OmsAsd),
-            ForegroundAmplitude = table.GetNonNegative("foreground_amplitude", defaults.ForegroundAmplitude),
+            ForegroundAmplitude = foreground.GetNonNegative("amplitude", defaults.ForegroundAmplitude),
             MinFrequencyHz = table.GetPositive("f_min_hz", defaults.MinFrequencyHz),
             MaxFrequencyHz = table.GetPositive("f_max_hz", defaultMax),
             IncludeT = table.GetBool("include_t", defaults.IncludeT),
@@ -117,11 +130,16 @@ public sealed record NoiseFitSettings
             SampleInterval = (int)table.GetInteger("sample_interval", defaults.SampleInterval, 1, 1_000_000),
             LevelPriorMin = table.GetPositive("level_prior_min", defaults.LevelPriorMin),
             LevelPriorMax = table.GetPositive("level_prior_max", defaults.LevelPriorMax),
-            ForegroundAmplitudeMax = table.GetPositive("foreground_amplitude_max", defaults.ForegroundAmplitudeMax),
+            ForegroundAmplitudeMax = foreground.GetPositive("amplitude_max", defaults.ForegroundAmplitudeMax),
         };
         table.RejectUnknownKeys(Keys);
+        foreground.RejectUnknownKeys(ForegroundKeys);
         string? problemKey = settings.FindProblem(shape, out string problem);
-        if (problemKey is not null) throw table.Invalid(problemKey, problem);
+        if (problemKey is not null)
+        {
+            if (problemKey.StartsWith("foreground.", StringComparison.Ordinal)) throw foreground.Invalid(problemKey["foreground.".Length..], problem);
+            throw table.Invalid(problemKey, problem);
+        }
         return settings;
     }
 
@@ -153,11 +171,8 @@ public sealed record NoiseFitSettings
     {
         ArgumentNullException.ThrowIfNull(writer);
         writer.Key("fit_levels", FitLevels);
-        writer.Key("foreground", Foreground);
-        writer.Key("foreground_fit_years", ForegroundFitYears);
         writer.Key("acceleration_asd", AccelerationAsd);
         writer.Key("oms_asd", OmsAsd);
-        writer.Key("foreground_amplitude", ForegroundAmplitude);
         writer.Key("f_min_hz", MinFrequencyHz);
         writer.Key("f_max_hz", MaxFrequencyHz);
         writer.Key("include_t", IncludeT);
@@ -167,7 +182,11 @@ public sealed record NoiseFitSettings
         writer.Key("sample_interval", (long)SampleInterval);
         writer.Key("level_prior_min", LevelPriorMin);
         writer.Key("level_prior_max", LevelPriorMax);
-        writer.Key("foreground_amplitude_max", ForegroundAmplitudeMax);
+        writer.Section("noise.foreground");
+        writer.Key("enabled", Foreground);
+        writer.Key("fit_years", ForegroundFitYears);
+        writer.Key("amplitude", ForegroundAmplitude);
+        writer.Key("amplitude_max", ForegroundAmplitudeMax);
     }
 
     /// <summary>The tabulated foreground duration nearest <paramref name="durationS"/> (the shorter one on a tie).</summary>
@@ -189,7 +208,7 @@ public sealed record NoiseFitSettings
         if (!GalacticConfusionSettings.SupportedObservationYears.Contains(ForegroundFitYears))
         {
             problem = $"must be one of {string.Join(", ", GalacticConfusionSettings.SupportedObservationYears)} (the durations the foreground fit tabulates), got {ForegroundFitYears}";
-            return "foreground_fit_years";
+            return "foreground.fit_years";
         }
         if (MaxFrequencyHz > shape.NyquistHz)
         {
@@ -223,8 +242,8 @@ public sealed record NoiseFitSettings
         }
         if (!(ForegroundAmplitudeMax > ForegroundAmplitude) || !double.IsFinite(ForegroundAmplitudeMax))
         {
-            problem = $"must be finite and above foreground_amplitude = {ForegroundAmplitude}, got {ForegroundAmplitudeMax}";
-            return "foreground_amplitude_max";
+            problem = $"must be finite and above amplitude = {ForegroundAmplitude}, got {ForegroundAmplitudeMax}";
+            return "foreground.amplitude_max";
         }
         if (TemperatureCount > 1 && !(MaxTemperature > 1.0))
         {

@@ -5,8 +5,8 @@ namespace GlobalFit.Engine.SourceClasses.Noise;
 /// <summary>The sampled vector of the noise fit: which levels it holds, in which order, with which bounds, and how
 /// it maps to PSD coefficients and to the reported ASDs.</summary>
 /// <remarks>Inside the sampler the instrument levels are ASD multipliers relative to the starting ASDs (order 1, so
-/// the proposals are well scaled) and the foreground level is its amplitude. Order: <c>acc_ae, oms_ae[, acc_t,
-/// oms_t][, foreground_amp]</c>. All bounds reject (rather than reflect) so that the independence proposal's density
+/// the proposals are well scaled) and the foreground level is its amplitude. Order: <c>acceleration_asd_ae_m_s2_rthz, oms_asd_ae_m_rthz[, acceleration_asd_t_m_s2_rthz,
+/// oms_asd_t_m_rthz][, foreground_amplitude_relative]</c>. All bounds reject (rather than reflect) so that the independence proposal's density
 /// stays exact.</remarks>
 internal sealed class NoiseParameterLayout
 {
@@ -15,43 +15,43 @@ internal sealed class NoiseParameterLayout
     public NoiseParameterLayout(NoiseFitSettings settings)
     {
         _settings = settings;
-        var names = new List<string> { "acc_ae", "oms_ae" };
+        var names = new List<string> { "acceleration_asd_ae_m_s2_rthz", "oms_asd_ae_m_rthz" };
         var specs = new List<ParameterSpec>
         {
-            new("acc_ae", "", settings.LevelPriorMin, settings.LevelPriorMax, BoundaryKind.Reject),
-            new("oms_ae", "", settings.LevelPriorMin, settings.LevelPriorMax, BoundaryKind.Reject),
+            new("acceleration_asd_ae_m_s2_rthz", "", settings.LevelPriorMin, settings.LevelPriorMax, BoundaryKind.Reject),
+            new("oms_asd_ae_m_rthz", "", settings.LevelPriorMin, settings.LevelPriorMax, BoundaryKind.Reject),
         };
         if (settings.IncludeT)
         {
             AccelerationT = names.Count;
             OmsT = names.Count + 1;
-            names.AddRange(["acc_t", "oms_t"]);
-            specs.Add(new("acc_t", "", settings.LevelPriorMin, settings.LevelPriorMax, BoundaryKind.Reject));
-            specs.Add(new("oms_t", "", settings.LevelPriorMin, settings.LevelPriorMax, BoundaryKind.Reject));
+            names.AddRange(["acceleration_asd_t_m_s2_rthz", "oms_asd_t_m_rthz"]);
+            specs.Add(new("acceleration_asd_t_m_s2_rthz", "", settings.LevelPriorMin, settings.LevelPriorMax, BoundaryKind.Reject));
+            specs.Add(new("oms_asd_t_m_rthz", "", settings.LevelPriorMin, settings.LevelPriorMax, BoundaryKind.Reject));
         }
         if (settings.Foreground)
         {
             Foreground = names.Count;
-            names.Add("foreground_amp");
-            specs.Add(new("foreground_amp", "", 0.0, settings.ForegroundAmplitudeMax, BoundaryKind.Reject));
+            names.Add("foreground_amplitude_relative");
+            specs.Add(new("foreground_amplitude_relative", "", 0.0, settings.ForegroundAmplitudeMax, BoundaryKind.Reject));
         }
         Names = [.. names];
         Schema = new ParameterSchema(specs);
     }
 
-    /// <summary>Index of acc_ae.</summary>
+    /// <summary>Index of acceleration_asd_ae_m_s2_rthz.</summary>
     public int AccelerationAe => 0;
 
-    /// <summary>Index of oms_ae.</summary>
+    /// <summary>Index of oms_asd_ae_m_rthz.</summary>
     public int OmsAe => 1;
 
-    /// <summary>Index of acc_t, or −1.</summary>
+    /// <summary>Index of acceleration_asd_t_m_s2_rthz, or −1.</summary>
     public int AccelerationT { get; } = -1;
 
-    /// <summary>Index of oms_t, or −1.</summary>
+    /// <summary>Index of oms_asd_t_m_rthz, or −1.</summary>
     public int OmsT { get; } = -1;
 
-    /// <summary>Index of foreground_amp, or −1.</summary>
+    /// <summary>Index of foreground_amplitude_relative, or −1.</summary>
     public int Foreground { get; } = -1;
 
     /// <summary>Column names, in vector order.</summary>

@@ -17,8 +17,8 @@ namespace GlobalFit.Engine.SourceClasses.Noise;
 /// <see cref="AetNoiseModel"/>, and is left out). Likelihood: Whittle over the bins of [f_min, f_max]
 /// (<see cref="WhittleLikelihood"/>), one vectorised pass per group per evaluation. Prior: uniform (see
 /// <see cref="NoiseFitSettings"/>).</para>
-/// <para>Sample columns: <c>acc_ae</c>, <c>oms_ae</c>[, <c>acc_t</c>, <c>oms_t</c>] as ASDs (m s⁻² Hz^-1/2 and
-/// m Hz^-1/2), [<c>foreground_amp</c>] as a multiplier of the published foreground; one "source" per sample.</para>
+/// <para>Sample columns: <c>acceleration_asd_ae_m_s2_rthz</c>, <c>oms_asd_ae_m_rthz</c>[, <c>acceleration_asd_t_m_s2_rthz</c>, <c>oms_asd_t_m_rthz</c>] as ASDs (m s⁻² Hz^-1/2 and
+/// m Hz^-1/2), [<c>foreground_amplitude_relative</c>] as a multiplier of the published foreground; one "source" per sample.</para>
 /// <para>Each update finds the maximum-likelihood levels of its residual and the Fisher matrix there
 /// (<see cref="NoiseModeFinder"/>), then continues the parallel-tempering sampler from its saved state with a
 /// mixture of a Student-t independence move centred there (weight 0.6), a random walk shaped by it (0.3) and

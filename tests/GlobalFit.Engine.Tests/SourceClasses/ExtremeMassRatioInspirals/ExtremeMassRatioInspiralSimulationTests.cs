@@ -88,6 +88,24 @@ public class ExtremeMassRatioInspiralSimulationTests(ITestOutputHelper output)
         Assert.Equal(without.Data.T.Samples.ToArray(), withSource.Data.T.Samples.ToArray());
     }
 
+    [Theory]
+    [InlineData("1e308")]
+    [InlineData("1e30")]
+    [InlineData("0")]
+    public void A_plunge_time_no_orbit_reaches_is_refused_naming_the_key(string value)
+    {
+        string text = Observation + "\n" + OneInspiral.Replace("orbital_frequency0_hz = 1e-3", "plunge_time_s = " + value, StringComparison.Ordinal);
+        var e = Assert.Throws<InvalidInputException>(() => Parse(text));
+        Assert.Contains("plunge_time_s", e.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void The_latest_accepted_plunge_time_still_reads()
+    {
+        string text = Observation + "\n" + OneInspiral.Replace("orbital_frequency0_hz = 1e-3", "plunge_time_s = 1e10", StringComparison.Ordinal);
+        Assert.Single(Parse(text).Sources);
+    }
+
     [Fact]
     public void An_inspiral_given_by_its_plunge_time_is_recorded_with_the_orbital_frequency_that_plunges_then()
     {

@@ -75,7 +75,7 @@ public sealed class InspiralFitRunTests : IDisposable
             seed = 12
             iterations = 4
             burn_in = 1
-            checkpoint_every = 1
+            checkpoint_every_iterations = 1
             threads = {threads}
             [extreme_mass_ratio_inspirals]
             steps_per_update = 15

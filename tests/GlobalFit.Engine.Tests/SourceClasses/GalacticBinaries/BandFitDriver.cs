@@ -75,40 +75,40 @@ internal sealed class BandFitDriver
             _data.InverseA.AsSpan(offset, window.Padded.Count).ToArray(), _data.InverseE.AsSpan(offset, window.Padded.Count).ToArray());
     }
 
-    /// <summary>Recovered fraction of the injected sources with SNR ≥ 10 and spurious fraction of the confident entries.</summary>
+    /// <summary>Recovered fraction of the injected sources with SNR ≥ 10 and spurious fraction of the confident sources.</summary>
     /// <remarks>Recovered: some entry with confidence ≥ 0.5 whose members match the source with median overlap ≥ 0.9.
     /// Spurious: an entry with confidence ≥ 0.5 whose median overlap with every injected source (loud or weak) is below
     /// the association threshold 0.5.</remarks>
-    /// <summary>The catalogue as the engine publishes it: entries with confidence ≥ 0.5 and median SNR at or above the
+    /// <summary>The catalogue as the engine publishes it: sources with confidence ≥ 0.5 and median SNR at or above the
     /// settings' <c>catalogue_min_snr</c>.</summary>
     public ImmutableArray<CatalogueEntry> Entries() => Catalogue.Build(0.5, _catalogueMinSnr);
 
     public (int Loud, int Recovered, int Confident, int Spurious) Score(IReadOnlyList<GalacticBinaryParameters> injected)
     {
-        var entries = Entries();
+        var rows = Entries();
         double MedianMatch(CatalogueEntry entry, GalacticBinaryParameters truth) =>
             entry.Members.Select(m => _data.Match(m, truth)).Order().ElementAt(entry.Members.Length / 2);
         var loud = injected.Where(s => _data.Snr(s) >= 10).ToList();
-        var near = entries.ToDictionary(e => e, e => injected.Where(s => Math.Abs(s.FrequencyHz - e.Median.FrequencyHz) < 40 * _data.DfHz).ToList());
-        int recovered = loud.Count(s => entries.Any(e => near[e].Contains(s) && MedianMatch(e, s) >= 0.9));
-        int spurious = entries.Count(e => !near[e].Any(s => MedianMatch(e, s) >= 0.5));
-        return (loud.Count, recovered, entries.Length, spurious);
+        var near = rows.ToDictionary(e => e, e => injected.Where(s => Math.Abs(s.FrequencyHz - e.Median.FrequencyHz) < 40 * _data.DfHz).ToList());
+        int recovered = loud.Count(s => rows.Any(e => near[e].Contains(s) && MedianMatch(e, s) >= 0.9));
+        int spurious = rows.Count(e => !near[e].Any(s => MedianMatch(e, s) >= 0.5));
+        return (loud.Count, recovered, rows.Length, spurious);
     }
 
     /// <summary>One line per spurious confident entry: where it is, how loud and how certain, and its nearest injected
-    /// source and nearest other confident entry, so a failing run shows whether the spurious entries are split companions.</summary>
+    /// source and nearest other confident entry, so a failing run shows whether the spurious sources are split companions.</summary>
     public IEnumerable<string> DescribeSpurious(IReadOnlyList<GalacticBinaryParameters> injected)
     {
-        var entries = Entries();
+        var rows = Entries();
         double MedianMatch(CatalogueEntry entry, GalacticBinaryParameters truth) =>
             entry.Members.Select(m => _data.Match(m, truth)).Order().ElementAt(entry.Members.Length / 2);
-        foreach (var entry in entries)
+        foreach (var entry in rows)
         {
             double f = entry.Median.FrequencyHz;
             var near = injected.Where(s => Math.Abs(s.FrequencyHz - f) < 40 * _data.DfHz).ToList();
             if (near.Any(s => MedianMatch(entry, s) >= 0.5)) continue;
             var truth = injected.MinBy(s => Math.Abs(s.FrequencyHz - f) / _data.DfHz - _data.Snr(s) / 10.0);
-            var neighbour = entries.Where(e => e != entry).MinBy(e => Math.Abs(e.Median.FrequencyHz - f));
+            var neighbour = rows.Where(e => e != entry).MinBy(e => Math.Abs(e.Median.FrequencyHz - f));
             yield return $"spurious f0 {f * 1e3:F6} mHz snr {entry.MedianSnr:F1} conf {entry.Confidence:F2} | nearest loud-weighted truth "
                 + $"{(truth.FrequencyHz - f) / _data.DfHz:+0.00;-0.00} bins snr {_data.Snr(truth):F1} match {MedianMatch(entry, truth):F2} | "
                 + $"neighbour entry {(neighbour is null ? double.NaN : (neighbour.Median.FrequencyHz - f) / _data.DfHz):+0.00;-0.00} bins "

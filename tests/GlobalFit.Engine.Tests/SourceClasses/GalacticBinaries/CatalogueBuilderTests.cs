@@ -34,16 +34,16 @@ public class CatalogueBuilderTests
             if (i % 10 < 3) sample.Add(occasional);
             builder.Add(sample);
         }
-        var entries = builder.Build();
-        Assert.Equal(2, entries.Length);
-        Assert.Equal(1.0, entries[0].Confidence);
-        Assert.Equal(0.3, entries[1].Confidence, 12);
-        Assert.Equal(steady.FrequencyHz, entries[0].Median.FrequencyHz, 1e-15);
-        Assert.Equal(steady.FrequencyHz + (0.05 * 99 - 49.5) * step, entries[0].Lower.FrequencyHz, 1e-15);
-        Assert.Equal(steady.FrequencyHz + (0.95 * 99 - 49.5) * step, entries[0].Upper.FrequencyHz, 1e-15);
+        var rows = builder.Build();
+        Assert.Equal(2, rows.Length);
+        Assert.Equal(1.0, rows[0].Confidence);
+        Assert.Equal(0.3, rows[1].Confidence, 12);
+        Assert.Equal(steady.FrequencyHz, rows[0].Median.FrequencyHz, 1e-15);
+        Assert.Equal(steady.FrequencyHz + (0.05 * 99 - 49.5) * step, rows[0].Lower.FrequencyHz, 1e-15);
+        Assert.Equal(steady.FrequencyHz + (0.95 * 99 - 49.5) * step, rows[0].Upper.FrequencyHz, 1e-15);
         // SNRs were set to 30 and 15 over these bins; the f0 spread changes ρ by far less than 1 %.
-        Assert.Equal(30, entries[0].MedianSnr, 0.3);
-        Assert.Equal(15, entries[1].MedianSnr, 1e-6);
+        Assert.Equal(30, rows[0].MedianSnr, 0.3);
+        Assert.Equal(15, rows[1].MedianSnr, 1e-6);
         Assert.Single(builder.Build(0.5));
     }
 
@@ -54,10 +54,10 @@ public class CatalogueBuilderTests
         var source = Source(data, 7776 + 100.2, 20);
         builder.Add([source]);
         builder.Add([source, source with { InitialPhaseRad = source.InitialPhaseRad + 0.01 }]);
-        var entries = builder.Build();
-        Assert.Equal(2, entries.Length);
-        Assert.All(entries, e => Assert.True(e.Confidence <= 1.0));
-        Assert.Equal([1.0, 0.5], entries.Select(e => e.Confidence).Order().Reverse().ToArray());
+        var rows = builder.Build();
+        Assert.Equal(2, rows.Length);
+        Assert.All(rows, e => Assert.True(e.Confidence <= 1.0));
+        Assert.Equal([1.0, 0.5], rows.Select(e => e.Confidence).Order().Reverse().ToArray());
     }
 
     // A phase shift of π/2 makes the overlap cos(π/2) = 0 while leaving f0 alone: the threshold decides, not proximity.
@@ -69,9 +69,9 @@ public class CatalogueBuilderTests
         builder.Add([source]);
         builder.Add([source with { InitialPhaseRad = source.InitialPhaseRad + 0.5 * Math.PI }]);
         builder.Add([source with { InitialPhaseRad = source.InitialPhaseRad + 0.3 }]);
-        var entries = builder.Build();
-        Assert.Equal(2, entries.Length);
-        Assert.Equal(2, entries.Max(e => e.MemberCount));
+        var rows = builder.Build();
+        Assert.Equal(2, rows.Length);
+        Assert.Equal(2, rows.Max(e => e.MemberCount));
     }
 
     [Fact]

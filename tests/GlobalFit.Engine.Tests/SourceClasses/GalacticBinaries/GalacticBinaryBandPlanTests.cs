@@ -11,7 +11,7 @@ public class GalacticBinaryBandPlanTests
     // One month at 5 s: Δf = 1/(30 d) ≈ 3.86e-7 Hz, Nyquist 0.1 Hz; N = 32 at 4 mHz (EnvelopeLengthRule).
     private static readonly GalacticBinaryTemplateGenerator Month = new(30 * 86400.0, 5.0);
 
-    private static GalacticBinaryBandSettings Settings => new() { MinFrequencyHz = 1e-3, MaxFrequencyHz = 4e-3, WindowBins = 256, PaddingBins = 32 };
+    private static GalacticBinaryBandSettings Settings => new() { MinFrequencyHz = 1e-3, MaxFrequencyHz = 4e-3, WindowBins = 256, MarginBins = 32 };
 
     [Fact]
     public void Cores_tile_the_band_without_gaps_and_neighbours_are_in_different_stages()
@@ -69,7 +69,7 @@ public class GalacticBinaryBandPlanTests
     {
         var year = new GalacticBinaryTemplateGenerator(365.25 * 86400.0, 5.0);
         var clock = Stopwatch.StartNew();
-        var plan = GalacticBinaryBandPlan.Create(new GalacticBinaryBandSettings { MinFrequencyHz = 1e-4, MaxFrequencyHz = 2e-2, WindowBins = 256, PaddingBins = 128 }, year);
+        var plan = GalacticBinaryBandPlan.Create(new GalacticBinaryBandSettings { MinFrequencyHz = 1e-4, MaxFrequencyHz = 2e-2, WindowBins = 256, MarginBins = 128 }, year);
         Assert.True(plan.Windows.Length > 2400);
         Assert.True(clock.Elapsed.TotalSeconds < 2);
         Assert.Equal(plan.Windows.Length - 1, plan.WindowOf(plan.Windows[^1].CoreEndHz - 0.5 * plan.DfHz));
@@ -79,13 +79,13 @@ public class GalacticBinaryBandPlanTests
     [Theory]
     [InlineData(1e-3, 4e-3, 20000, 32, "window_bins")]
     [InlineData(1e-3, 0.2, 256, 32, "f_max_hz")]
-    [InlineData(1e-3, 4e-3, 256, 8, "padding_bins")]
+    [InlineData(1e-3, 4e-3, 256, 8, "margin_bins")]
     [InlineData(1e-3, 4e-3, 16, 32, "window_bins")]
     [InlineData(4e-3, 1e-3, 256, 32, "f_max_hz")]
     [InlineData(1e-7, 4e-3, 256, 32, "f_min_hz")]
     public void Inconsistent_settings_are_refused_naming_the_key(double fMin, double fMax, int windowBins, int paddingBins, string key)
     {
-        var settings = new GalacticBinaryBandSettings { MinFrequencyHz = fMin, MaxFrequencyHz = fMax, WindowBins = windowBins, PaddingBins = paddingBins };
+        var settings = new GalacticBinaryBandSettings { MinFrequencyHz = fMin, MaxFrequencyHz = fMax, WindowBins = windowBins, MarginBins = paddingBins };
         var problem = Assert.ThrowsAny<ArgumentException>(() => GalacticBinaryBandPlan.Create(settings, Month));
         Assert.Equal(key, problem.ParamName);
     }
@@ -98,7 +98,7 @@ public class GalacticBinaryBandPlanTests
             f_min_hz = 2e-3
             f_max_hz = 3e-3
             window_bins = 128
-            padding_bins = 40
+            margin_bins = 40
             max_sources_per_window = 12
             temperatures = 3
             snr_prior_peak = 8

@@ -13,7 +13,7 @@ public class GalacticBinaryBandWorkerTests(ITestOutputHelper output)
         MinFrequencyHz = 3.0e-3,
         MaxFrequencyHz = 3.0e-3 + 256 / (30 * 86400.0),
         WindowBins = 128,
-        PaddingBins = 32,
+        MarginBins = 32,
         MaxSourcesPerWindow = 6,
         TemperatureCount = 4,
         MaxTemperature = 50,

@@ -52,22 +52,24 @@ public class GalacticBinaryClassCatalogueTests
         var record = Assert.Single(catalogue.Build());
         Assert.Equal("gb-0001", record.Id);
         Assert.Equal("galactic_binaries", record.ClassId);
-        Assert.Equal(Columns, record.ParameterNames);
+        // The catalogue's columns are the truth table's: the sampled eight with fddot_hz_s2 beside fdot_hz_s.
+        Assert.Equal(["f0_hz", "fdot_hz_s", "fddot_hz_s2", "amplitude", "beta_rad", "lambda_rad", "iota_rad", "psi_rad", "phi0_rad"], record.ParameterNames.ToArray());
         Assert.Equal(1.0, record.Confidence);
         Assert.Equal(21, record.SampleCount);
         // Tolerance: v_0 + i·step is evaluated once here and once in the builder's interpolation; 1e-15 relative.
         Assert.Equal(steady.FrequencyHz + 10 * fStep, record.Median[0], steady.FrequencyHz * 1e-15);
         Assert.Equal(steady.FrequencyHz + 1 * fStep, record.Lower[0], steady.FrequencyHz * 1e-15);
         Assert.Equal(steady.FrequencyHz + 19 * fStep, record.Upper[0], steady.FrequencyHz * 1e-15);
-        Assert.Equal(steady.Amplitude + 10 * aStep, record.Median[2], steady.Amplitude * 1e-14);
-        Assert.Equal(steady.Amplitude + 1 * aStep, record.Lower[2], steady.Amplitude * 1e-14);
-        Assert.Equal(steady.Amplitude + 19 * aStep, record.Upper[2], steady.Amplitude * 1e-14);
-        Assert.Equal(steady.EclipticLatitudeRad, record.Median[3]);
+        Assert.Equal(0.0, record.Median[2]); // f̈: the samples hold none, so 0, the value the fit keeps it at
+        Assert.Equal(steady.Amplitude + 10 * aStep, record.Median[3], steady.Amplitude * 1e-14);
+        Assert.Equal(steady.Amplitude + 1 * aStep, record.Lower[3], steady.Amplitude * 1e-14);
+        Assert.Equal(steady.Amplitude + 19 * aStep, record.Upper[3], steady.Amplitude * 1e-14);
+        Assert.Equal(steady.EclipticLatitudeRad, record.Median[4]);
         // The SNR was set to 30 at the central amplitude; ±10 % amplitude spread moves the median SNR by the median's 10 %.
         Assert.Equal(30 * (1 + 10 * 0.01), record.Snr, 0.3);
-        // Samples keep their arrival order, one row of eight columns each.
+        // Samples keep their arrival order, one row of the nine catalogue columns each.
         Assert.Equal(steady.FrequencyHz + order[0] * fStep, record.Samples[0]);
-        Assert.Equal(steady.FrequencyHz + order[20] * fStep, record.Samples[20 * 8]);
+        Assert.Equal(steady.FrequencyHz + order[20] * fStep, record.Samples[20 * 9]);
     }
 
     // Confidence is per band: a source in half of its own band's samples has confidence 0.5, however many other bands
@@ -114,6 +116,6 @@ public class GalacticBinaryClassCatalogueTests
         int[] permutation = [7, 6, 5, 4, 3, 2, 1, 0];
         catalogue.Add(new SampleBlock("galactic_binaries/0000", "galactic_binaries", 1, [.. permutation.Select(i => Columns[i])], [1],
             [.. permutation.Select(i => row[i])], [0.0]));
-        Assert.Equal(row, Assert.Single(catalogue.Build()).Median);
+        Assert.Equal(source.ToTableRow(), Assert.Single(catalogue.Build()).Median);
     }
 }

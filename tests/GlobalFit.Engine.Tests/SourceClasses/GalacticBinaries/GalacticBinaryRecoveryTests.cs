@@ -15,9 +15,9 @@ public class GalacticBinaryRecoveryTests(ITestOutputHelper output)
     // "no spurious entry at all". The sampler often leaves a weak companion (SNR 5–20) on the SNR-50 source: when the
     // main source sits in a sky mode that fits slightly worse, a second source absorbs the rest, and without
     // split/merge moves the pair rarely collapses within a short run. Measured over driver seeds 1, 2, 3, 99: 4/4
-    // recovered each time; 1–3 companions among 5–7 confident entries. Runtime ~10 s on the shared 2-core machine.
+    // recovered each time; 1–3 companions among 5–7 confident sources. Runtime ~10 s on the shared 2-core machine.
     // Known failure mode, seen after the adaptive proposals changed (seed 99): the SNR-50 source is split into two
-    // confident entries 0.5 bins apart (SNR 35 and 41), neither matching the truth at 0.9. Split/merge moves exist now
+    // confident sources 0.5 bins apart (SNR 35 and 41), neither matching the truth at 0.9. Split/merge moves exist now
     // but are seldom accepted for such pairs (0.1–0.2 % of cold-chain proposals in the full-band run), so this test
     // still asserts that every loud source is detected (a confident entry
     // within one template length), that at least three of the four are recovered at match ≥ 0.9, and that no
@@ -49,27 +49,27 @@ public class GalacticBinaryRecoveryTests(ITestOutputHelper output)
         foreach (var entry in driver.Entries()) output.WriteLine($"{entry.Median.FrequencyHz / df:F2} conf {entry.Confidence:F2} snr {entry.MedianSnr:F1}");
         Assert.Equal(4, loud);
         Assert.True(recovered >= 3, $"{recovered}/4 recovered at match ≥ 0.9");
-        var entries = driver.Entries();
+        var rows = driver.Entries();
         foreach (var source in injected)
-            Assert.Contains(entries, e => Math.Abs(source.FrequencyHz - e.Median.FrequencyHz) < plan.TemplateBins * df);
-        foreach (var entry in entries)
+            Assert.Contains(rows, e => Math.Abs(source.FrequencyHz - e.Median.FrequencyHz) < plan.TemplateBins * df);
+        foreach (var entry in rows)
             Assert.Contains(injected, s => Math.Abs(s.FrequencyHz - entry.Median.FrequencyHz) < plan.TemplateBins * df);
     }
 
     // The full recovery check: 1–4 mHz over one month, ~50 resolvable binaries (SNR 10–100, log-uniform) and 400 weak
     // ones (SNR 0.5–4) in instrument noise; ≥ 90 % of the SNR ≥ 10 sources recovered with overlap ≥ 0.9 and ≤ 10 % of
-    // the confident entries spurious. Run with
+    // the confident sources spurious. Run with
     // dotnet test tests/GlobalFit.Engine.Tests -c Release --filter "FullyQualifiedName~Full_band_recovery"
-    // Measured (30 windows, 8 rounds of 500 steps, seeds as written): 48/50 recovered (96 %), 6/68 confident entries
+    // Measured (30 windows, 8 rounds of 500 steps, seeds as written): 48/50 recovered (96 %), 6/68 confident sources
     // spurious (8.8 %), 158 s, with the first adaptive proposals; with the later ones 48/50 recovered and 8/65 spurious
     // (12.3 %), mostly companions patching the misfit of a loud source. With split/merge moves added 48/50 and 8/68;
     // with the birth-density jump as well 48/50 and 7/64; with the backfitted starting search as well 48/50 and 6/62
     // (9.7 %), 114 s: met, narrowly; three of those six still patched loud sources (one of them two loud binaries 1.3 bins
     // apart fitted as one) and the others were SNR 3–5 fits to the weak population. The ziggurat Gaussian generator then
     // changed the noise realisation: 48/50 recovered and 9/67 spurious (13.4 %), 128 s, of which seven are SNR 3–4.5
-    // entries with no injected source above SNR 2 within 4 bins (blends of the weak population or noise, which the
+    // sources with no injected source above SNR 2 within 4 bins (blends of the weak population or noise, which the
     // likelihood's instrument-only PSD does not model) and two are companions of one SNR-92 source. With about 65
-    // confident entries the spurious count moves by ±2–3 between realisations. The catalogue now leaves out entries with
+    // confident sources the spurious count moves by ±2–3 between realisations. The catalogue now leaves out sources with
     // median SNR below catalogue_min_snr (default 5, common practice for published catalogues): 48/50 recovered and 4/58
     // spurious (6.9 %), 107 s; all four left are companions of SNR ≈ 90 sources (a loud source fitted slightly off in sky
     // and f0, the month-long degeneracy, with a second source absorbing the misfit). The lines printed after the summary
@@ -84,7 +84,7 @@ public class GalacticBinaryRecoveryTests(ITestOutputHelper output)
             MinFrequencyHz = 1e-3,
             MaxFrequencyHz = 4e-3,
             WindowBins = 256,
-            PaddingBins = 32,
+            MarginBins = 32,
             MaxSourcesPerWindow = 10,
             TemperatureCount = 4,
             MaxTemperature = 50,

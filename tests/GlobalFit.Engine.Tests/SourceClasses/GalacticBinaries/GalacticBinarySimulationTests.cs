@@ -23,7 +23,7 @@ public class GalacticBinarySimulationTests
         id = "loud"
         f0_hz = 3.1e-3
         fdot_hz_s = 1e-16
-        amp = 2e-22
+        amplitude = 2e-22
         beta_rad = 0.4
         lambda_rad = 2.0
         iota_rad = 0.7
@@ -101,10 +101,10 @@ public class GalacticBinarySimulationTests
     }
 
     [Theory]
-    [InlineData("[[galactic_binaries.binary]]\nf0_hz = 1e-3\n", "each binary needs 'amp'")]
-    [InlineData("[[galactic_binaries.binary]]\nf0_hz = 0.049\namp = 1e-22\n", "Nyquist")]
-    [InlineData("[[galactic_binaries.binary]]\nf0_hz = 1e-3\namp = 1e-22\nbeta_rad = 2.0\n", "key 'galactic_binaries.binary.beta_rad'")]
-    [InlineData("[[galactic_binaries.binary]]\nf0_hz = 1e-3\namp = 1e-22\nfreq = 2\n", "unknown key 'galactic_binaries.binary.freq'")]
+    [InlineData("[[galactic_binaries.binary]]\nf0_hz = 1e-3\n", "each binary needs 'amplitude'")]
+    [InlineData("[[galactic_binaries.binary]]\nf0_hz = 0.049\namplitude = 1e-22\n", "Nyquist")]
+    [InlineData("[[galactic_binaries.binary]]\nf0_hz = 1e-3\namplitude = 1e-22\nbeta_rad = 2.0\n", "key 'galactic_binaries.binary.beta_rad'")]
+    [InlineData("[[galactic_binaries.binary]]\nf0_hz = 1e-3\namplitude = 1e-22\nfreq = 2\n", "unknown key 'galactic_binaries.binary.freq'")]
     [InlineData("[galactic_binaries.population]\nf_min_hz = 2e-3\nf_max_hz = 1e-3\n", "must exceed f_min_hz")]
     [InlineData("[galactic_binaries]\nbinaries = 3\n", "did you mean 'binary'?")]
     [InlineData("[galactic_binarys.population]\ncount = 3\n", "did you mean 'galactic_binaries'?")]

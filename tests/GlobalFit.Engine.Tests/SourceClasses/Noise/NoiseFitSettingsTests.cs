@@ -35,7 +35,9 @@ public class NoiseFitSettingsTests
     [Theory]
     [InlineData("f_max_hzz = 0.01", "f_max_hzz")]
     [InlineData("f_max_hz = 0.2", "f_max_hz")]
-    [InlineData("foreground_fit_years = 3", "foreground_fit_years")]
+    [InlineData("[noise.foreground]\nfit_years = 3", "foreground.fit_years")]
+    [InlineData("foreground_fit_years = 1", "foreground_fit_years")]
+    [InlineData("[noise.foreground]\nenable = true", "foreground.enable")]
     [InlineData("f_min_hz = 0.05\nf_max_hz = 0.02", "f_min_hz")]
     [InlineData("level_prior_max = 0.5", "level_prior_max")]
     [InlineData("acceleration_asd = -1.0", "acceleration_asd")]
@@ -57,13 +59,28 @@ public class NoiseFitSettingsTests
     [Fact]
     public void Resolved_settings_read_back_to_the_same_settings()
     {
-        var settings = NoiseFitSettings.FromConfig(NoiseTable("include_t = false\nforeground_amplitude = 1.5\ntemperatures = 2"), Year);
+        var settings = NoiseFitSettings.FromConfig(NoiseTable("include_t = false\ntemperatures = 2\n[noise.foreground]\namplitude = 1.5"), Year);
         var writer = new ResolvedConfigWriter();
         writer.Section("noise");
         settings.WriteResolved(writer);
         var table = ConfigDocument.Parse(writer.ToString(), "resolved.toml").GetTable("noise")!;
-        Assert.Equal(settings, NoiseFitSettings.FromConfig(table, Year));
+        Assert.Equal(settings with { ForegroundFitYearsOrigin = "set in the run configuration" }, NoiseFitSettings.FromConfig(table, Year));
         Assert.Equal(NoiseFitSettings.Keys.Length, table.Keys.Count());
+        Assert.Equal(NoiseFitSettings.ForegroundKeys.Length, table.GetTable("foreground")!.Keys.Count());
+    }
+
+    [Fact]
+    public void The_foreground_fit_defaults_to_the_scenario_recorded_in_the_data_file_and_says_so()
+    {
+        // A month: the fit nearest its length is half a year, but the file's scenario simulated the one-year fit.
+        var month = new FitDataShape("month.h5", 259_200, 10.0, 0.0);
+        var recorded = NoiseFitSettings.FromConfig(NoiseTable(""), month with { ScenarioForegroundFitYears = 1.0 });
+        Assert.Equal((1.0, "from the scenario recorded in the observation file"), (recorded.ForegroundFitYears, recorded.ForegroundFitYearsOrigin));
+        var nearest = NoiseFitSettings.FromConfig(NoiseTable(""), month);
+        Assert.Equal(0.5, nearest.ForegroundFitYears);
+        Assert.StartsWith("nearest the record's length", nearest.ForegroundFitYearsOrigin, StringComparison.Ordinal);
+        var set = NoiseFitSettings.FromConfig(NoiseTable("[noise.foreground]\nfit_years = 2"), month with { ScenarioForegroundFitYears = 1.0 });
+        Assert.Equal((2.0, "set in the run configuration"), (set.ForegroundFitYears, set.ForegroundFitYearsOrigin));
     }
 
     [Fact]

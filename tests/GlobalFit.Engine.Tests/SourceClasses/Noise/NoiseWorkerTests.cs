@@ -40,7 +40,7 @@ public class NoiseWorkerTests
             for (int s = 0; s < block.SampleCount; s++) values.Add(block.Values.AsSpan(s * columns.Count, columns.Count).ToArray());
         }
         double[] truth = [Truth.AccelerationAsdAe, Truth.OmsAsdAe, Truth.AccelerationAsdT, Truth.OmsAsdT, Truth.ForegroundAmplitude];
-        Assert.Equal(["acc_ae", "oms_ae", "acc_t", "oms_t", "foreground_amp"], columns);
+        Assert.Equal(["acceleration_asd_ae_m_s2_rthz", "oms_asd_ae_m_rthz", "acceleration_asd_t_m_s2_rthz", "oms_asd_t_m_rthz", "foreground_amplitude_relative"], columns);
         for (int i = 0; i < columns.Count; i++)
         {
             double mean = values.Average(v => v[i]);
@@ -145,7 +145,7 @@ public class NoiseWorkerTests
     {
         var worker = new NoiseWorker(Settings() with { IncludeT = false, Foreground = false }, NoiseTestData.Shape, 5);
         var update = worker.Fit(Data.Value.Residual(worker.Bins, includeT: false), 20);
-        Assert.Equal(["acc_ae", "oms_ae"], update.Samples.ParameterNames);
+        Assert.Equal(["acceleration_asd_ae_m_s2_rthz", "oms_asd_ae_m_rthz"], update.Samples.ParameterNames);
         Assert.Equal(20, update.Samples.SampleCount);
         Assert.Equal(0.0, update.Levels.ForegroundAmplitude);
         Assert.Equal(Start.AccelerationAsdT, update.Levels.AccelerationAsdT); // unfitted T stays at its starting level

@@ -8,7 +8,7 @@ import h5py
 import numpy as np
 
 with h5py.File("h5py_observation.h5", "w", userblock_size=512) as f:
-    f.attrs["format_version"] = np.int64(1)
+    f.attrs["format_version"] = np.int64(2)
     f.attrs["created_utc"] = "2026-12-01T23:05:00+01:00"
     f.attrs["generator"] = np.bytes_("h5py reference writer")
     f.create_group("provenance").attrs["seed"] = "7"
@@ -23,5 +23,5 @@ with h5py.File("h5py_observation.h5", "w", userblock_size=512) as f:
     f.create_dataset("gaps", data=np.array([[1.9e9 + 0.5, 1.9e9 + 1.5]]))
     table = f.create_group("truth/galactic_binaries")
     values = table.create_dataset("values", data=np.array([[3.0e-3, 1.5e-22], [4.5e-3, np.nan]]))
-    values.attrs["columns"] = ["f0_hz", "amp"]
+    values.attrs["columns"] = ["f0_hz", "amplitude"]
     table.create_dataset("ids", data=["gb-a", "gb-b"])

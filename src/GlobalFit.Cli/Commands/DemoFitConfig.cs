@@ -5,7 +5,7 @@ namespace GlobalFit.Cli.Commands;
 /// iteration.</summary>
 internal static class DemoFitConfig
 {
-    /// <summary>Iterations of the demo fit by default (about three minutes on two cores).</summary>
+    /// <summary>Iterations of the demo fit by default (about two minutes for the whole demo on two cores).</summary>
     public const int Iterations = 24;
 
     /// <summary>The configuration with <paramref name="iterations"/> iterations, a third of them burn-in.</summary>

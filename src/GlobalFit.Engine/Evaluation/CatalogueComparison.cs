@@ -198,7 +198,10 @@ public static class CatalogueComparison
             int p = source.ParameterNames.IndexOf(columns[c]);
             double value = truth[c];
             if (periods[c] > 0) value -= periods[c] * Math.Floor(value / periods[c]);
-            inside[c] = value >= source.Lower[p] && value <= source.Upper[p];
+            bool In(double v) => v >= source.Lower[p] && v <= source.Upper[p];
+            // A class may summarise an angle around its circular mean, so an interval can reach below 0 or above the
+            // period: the truth is inside when any of its images is.
+            inside[c] = In(value) || (periods[c] > 0 && (In(value - periods[c]) || In(value + periods[c])));
         }
         return [.. inside];
     }

@@ -14,8 +14,12 @@ namespace GlobalFit.Engine.SourceClasses;
 public sealed record SourceClassRegistry(IReadOnlyList<ISourceClass> Classes)
 {
     /// <summary>What this build implements: the one registration list.</summary>
+    /// <remarks>The broadband classes come first because the default schedule runs groups in this order: the loud chirps
+    /// are then fitted before the galactic-binary band workers first see the residual, rather than the band workers
+    /// fitting pieces of a chirp as binaries (measured on the demo: with the binaries first the joint fit stayed in a
+    /// mode ~600 lower in ln L, the chirp mass 8 % off).</remarks>
     public static SourceClassRegistry Default { get; } =
-        new([new GalacticBinaryClass(), new MassiveBlackHoleBinaryClass(), new ExtremeMassRatioInspiralClass(), new NoiseClass()]);
+        new([new MassiveBlackHoleBinaryClass(), new ExtremeMassRatioInspiralClass(), new GalacticBinaryClass(), new NoiseClass()]);
 
     /// <summary>The module with id <paramref name="id"/>, or null.</summary>
     public ISourceClass? Find(string id) => Classes.FirstOrDefault(c => c.Id == id);

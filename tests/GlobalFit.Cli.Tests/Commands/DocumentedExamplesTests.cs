@@ -49,6 +49,22 @@ public class DocumentedExamplesTests
         Assert.Single(scenario.Sources);
     }
 
+    [Fact]
+    public void The_inspiral_fit_section_shown_in_the_readme_is_valid_and_shows_every_key()
+    {
+        string readme = File.ReadAllText(RepositoryFiles.PathOf("README.md"));
+        var block = Regex.Match(readme, "```toml\n(?<body>\\[extreme_mass_ratio_inspirals\\].*?)```", RegexOptions.Singleline);
+        Assert.True(block.Success, "README has no inspiral fit example");
+        var root = ConfigDocument.Parse(block.Groups["body"].Value, "README.md");
+        var module = SourceClassRegistry.Default.Find("extreme_mass_ratio_inspirals")!;
+        var plan = module.PlanFit(root.GetTable("extreme_mass_ratio_inspirals")!, new FitDataShape("month.h5", 259_200, 10, 0));
+        Assert.Single(plan.Groups.SelectMany(g => g.Workers));
+        var writer = new ResolvedConfigWriter();
+        plan.WriteResolved(writer);
+        foreach (var line in writer.ToString().Split('\n').Where(l => l.Contains(" = ", StringComparison.Ordinal)))
+            Assert.Contains(line[..line.IndexOf(" = ", StringComparison.Ordinal)] + " = ", block.Groups["body"].Value, StringComparison.Ordinal);
+    }
+
     public static TheoryData<string> FitConfigFiles()
     {
         var data = new TheoryData<string>();

@@ -9,7 +9,8 @@ using GlobalFit.Physics.Series;
 namespace GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
 
 /// <summary>Quick timing of the fast inspiral template with its log-likelihood (one Julian year at 10 s; M = 1e6,
-/// μ = 10, χ = 0.5, e0 = 0.2) and its ratio to the direct time-domain path.</summary>
+/// μ = 10, χ = 0.5, e0 = 0.2), its ratio to the direct time-domain path, and the semi-coherent statistic's cost per
+/// segment.</summary>
 /// <remarks>The likelihood loop runs for one second after half a second of warm-up (so the timed code is the
 /// optimised one). The direct path costs several seconds for a year, so it is timed over 30 days and scaled to the year
 /// by the sample count (its cost is per sample); the whole suite takes a few seconds.</remarks>
@@ -17,6 +18,7 @@ internal static class ExtremeMassRatioInspiralBench
 {
     private const double Cadence = 10.0;
     private const double DirectDays = 30;
+    private const int SearchSegments = 8;
 
     private static readonly ExtremeMassRatioInspiralParameters Source =
         new(1e6, 10, 0.5, 1.5e-4, 0.2, 0.9, 0.3, 1.2, 1.0, 2.5, 1000, 0.4, 1.1, 2.0);
@@ -49,6 +51,18 @@ internal static class ExtremeMassRatioInspiralBench
         }
         double perSecond = calls / clock.Elapsed.TotalSeconds;
 
+        // The search's statistic with its first stage's eight segments over the same year and bins.
+        var statistic = new SemiCoherentStatistic(generator, window, SearchSegments, dataA, dataE, inverseA, inverseE);
+        sink += statistic.Evaluate(Source);
+        long evaluations = 0;
+        clock.Restart();
+        while (clock.Elapsed.TotalSeconds < 1.0)
+        {
+            sink += statistic.Evaluate(Source with { Phi0Rad = 0.4 + 1e-6 * evaluations });
+            evaluations++;
+        }
+        double segmentMilliseconds = 1e3 * clock.Elapsed.TotalSeconds / (evaluations * SearchSegments);
+
         int directSamples = (int)(DirectDays * 86_400 / Cadence);
         var direct = new ExtremeMassRatioInspiralDirectWaveform(directSamples, Cadence);
         GC.KeepAlive(new ExtremeMassRatioInspiralDirectWaveform(directSamples / 30, Cadence).Spectra(Source)); // warm-up
@@ -60,6 +74,8 @@ internal static class ExtremeMassRatioInspiralBench
             $"inspiral fast template + log-likelihood per second, one core (1 yr at 10 s, e0 = 0.2, {window.Count} bins)");
         yield return new BenchFigure("emri_direct_path_s_per_year", directYearSeconds,
             $"direct time-domain path for the same year, seconds (timed over {DirectDays:F0} days, scaled by samples)");
+        yield return new BenchFigure("emri_semicoherent_ms_per_segment", segmentMilliseconds,
+            $"semi-coherent statistic, milliseconds per segment ({SearchSegments} segments of the same year; one evaluation costs {SearchSegments} of these)");
         yield return new BenchFigure("emri_speedup_over_direct_path", directYearSeconds * perSecond,
             "same source: direct path time / fast template + log-likelihood time");
     }

@@ -7,9 +7,10 @@ using GlobalFit.Physics.ExtremeMassRatioInspirals;
 
 namespace GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
 
-/// <summary>The extreme-mass-ratio inspiral module. Built so far: its scenario section (an invented population and
-/// listed inspirals, injected with the fast analytic-kludge template) and its quick bench figures. Fitting the class is
-/// not built yet: <see cref="PlanFit"/> refuses a run-configuration section for it.</summary>
+/// <summary>The extreme-mass-ratio inspiral module: its scenario section (an invented population and listed inspirals,
+/// injected with the fast analytic-kludge template), its fit (one parallel-tempering worker per inspiral, started from
+/// a row and a semi-coherent search, <see cref="InspiralFitPlan"/>), its catalogue rows, its part of the demo and its
+/// quick bench figures.</summary>
 public sealed class ExtremeMassRatioInspiralClass : ISourceClass
 {
     /// <summary>The class id: config and scenario section, truth table, worker-id prefix. Defined once, by the
@@ -34,15 +35,11 @@ public sealed class ExtremeMassRatioInspiralClass : ISourceClass
     /// <inheritdoc />
     ISimulatedSourceClass? ISourceClass.Simulation => Simulation;
 
-    /// <summary>None: the demo cannot fit this class yet.</summary>
-    public IDemoPart? Demo => null;
+    /// <summary>One invented inspiral in the demo's month, fitted from a start row some posterior widths off.</summary>
+    public IDemoPart? Demo { get; } = new InspiralDemo();
 
-    /// <summary>Refuses: fitting extreme-mass-ratio inspirals is not built yet.</summary>
-    /// <exception cref="Physics.Files.InvalidInputException">Always; the message names the section.</exception>
-    public IFitSourceClassPlan PlanFit(ConfigTable section, FitDataShape shape)
-    {
-        ArgumentNullException.ThrowIfNull(section);
-        throw section.InvalidTable(
-            $"fitting extreme-mass-ratio inspirals is not built yet: this build can simulate them but not fit them; remove the [{Id}] section");
-    }
+    /// <summary>Reads the <c>[extreme_mass_ratio_inspirals]</c> section (see <see cref="InspiralFitPlan.FromConfig"/>).</summary>
+    /// <exception cref="Physics.Files.InvalidInputException">A key is malformed or a start row is unusable; the message
+    /// names the key.</exception>
+    public IFitSourceClassPlan PlanFit(ConfigTable section, FitDataShape shape) => InspiralFitPlan.FromConfig(section, shape);
 }

@@ -3,7 +3,6 @@ namespace GlobalFit.Engine.SourceClasses.MassiveBlackHoleBinaries;
 /// <summary>The massive black-hole binary of the built-in demo: one invented binary (about 10⁶ M☉ detector-frame total mass at
 /// 10⁵ Mpc, SNR about 130) merging on day 20 of the month, and one worker to find and fit it; <c>globalfit compare</c> reports
 /// it against the truth with <see cref="MassiveBlackHoleBinaryMatcher"/>.</summary>
-/// <remarks>Its fit configuration runs the binary's stage before the galactic binaries' (see <see cref="FitToml"/>).</remarks>
 internal sealed class MassiveBlackHoleBinaryDemo : IDemoPart
 {
     public string ScenarioToml => """
@@ -22,14 +21,7 @@ internal sealed class MassiveBlackHoleBinaryDemo : IDemoPart
         phi_ref_rad = 1.3
         """;
 
-    // The schedule runs the binary's stage first. With the default order (galactic binaries first) the band workers of
-    // the first iteration see the whole chirp and fit parts of it as binaries; the search then sees a residual with
-    // those parts removed, and the joint fit stays in a worse mode (measured on the demo: ln L of the whole fit ~600
-    // lower, chirp mass 8 % off). The demo has no other classes with groups, so the list is complete.
     public string FitToml => """
-        [schedule]
-        stages = [["massive_black_hole_binaries.01"], ["galactic_binaries.even"], ["galactic_binaries.odd"], ["noise"]]
-
         [massive_black_hole_binaries]
         count = 1
         f_min_hz = 1e-4

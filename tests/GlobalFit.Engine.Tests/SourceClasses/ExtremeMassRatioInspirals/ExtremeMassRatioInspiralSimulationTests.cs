@@ -192,12 +192,12 @@ public class ExtremeMassRatioInspiralSimulationTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void A_run_configuration_with_the_section_is_refused_as_not_built_yet()
+    public void A_run_configuration_section_without_start_rows_is_refused_naming_the_start_table()
     {
         var root = ConfigDocument.Parse("data = \"d.h5\"\n[extreme_mass_ratio_inspirals]\n", "fit.toml");
         var e = Assert.Throws<InvalidInputException>(() =>
             RunPlan.FromConfig(root, Path.GetTempPath(), new FitDataShape("d.h5", 4096, 10, 0)));
-        Assert.Contains("not built yet", e.Message, StringComparison.Ordinal);
-        Assert.Contains("extreme_mass_ratio_inspirals", e.Message, StringComparison.Ordinal);
+        Assert.Contains("[[extreme_mass_ratio_inspirals.start]]", e.Message, StringComparison.Ordinal);
+        Assert.DoesNotContain("not built yet", e.Message, StringComparison.Ordinal);
     }
 }

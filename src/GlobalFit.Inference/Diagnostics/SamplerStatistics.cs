@@ -13,4 +13,21 @@ public sealed record SamplerStatistics(
     ImmutableArray<double> InverseTemperatures,
     ImmutableArray<ProposalAcceptance> Proposals,
     ImmutableArray<double> SwapAcceptanceRates,
-    ImmutableArray<double> MeanLogLikelihoods);
+    ImmutableArray<double> MeanLogLikelihoods)
+{
+    /// <summary>Accepted over proposed moves of every proposal on the cold rung (index 0); 0 before any was proposed.</summary>
+    public double ColdAcceptanceRate
+    {
+        get
+        {
+            long proposed = 0, accepted = 0;
+            foreach (var proposal in Proposals)
+            {
+                if (proposal.TemperatureIndex != 0) continue;
+                proposed += proposal.Proposed;
+                accepted += proposal.Accepted;
+            }
+            return proposed == 0 ? 0.0 : (double)accepted / proposed;
+        }
+    }
+}

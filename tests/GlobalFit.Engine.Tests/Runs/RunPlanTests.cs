@@ -56,11 +56,11 @@ public sealed class RunPlanTests(SharedFitData data) : IClassFixture<SharedFitDa
     }
 
     [Fact]
-    public void A_massive_black_hole_binary_section_plans_one_stage_per_binary_between_galactic_binaries_and_noise()
+    public void A_massive_black_hole_binary_section_plans_one_stage_per_binary_before_galactic_binaries_and_noise()
     {
         var plan = Plan("", extra: "[massive_black_hole_binaries]\ncount = 2\nf_max_hz = 0.02\n");
         Assert.Equal(
-            ["galactic_binaries.even", "galactic_binaries.odd", "massive_black_hole_binaries.01", "massive_black_hole_binaries.02", "noise"],
+            ["massive_black_hole_binaries.01", "massive_black_hole_binaries.02", "galactic_binaries.even", "galactic_binaries.odd", "noise"],
             plan.Schedule.Stages.Select(s => Assert.Single(s)));
         var resolved = ConfigDocument.Parse(plan.ResolvedToml(), "run.toml").GetTable("massive_black_hole_binaries")!;
         foreach (string key in GlobalFit.Engine.SourceClasses.MassiveBlackHoleBinaries.MassiveBlackHoleBinaryFitSettings.Keys)

@@ -117,7 +117,7 @@ internal sealed class InspiralWorker : IFitWorker
         clock.Stop();
         var block = new SampleBlock(Id, ExtremeMassRatioInspiralClass.Id, 0, [.. ExtremeMassRatioInspiralParameters.ColumnNames],
             [.. Enumerable.Repeat(1, collector.Count)], [.. collector.Values], [.. collector.LogLikelihoods]);
-        var statistics = new WorkerStatistics(steps, sampler.Step, 1, sampler.LogLikelihood(0), ColdAcceptance(sampler), clock.Elapsed);
+        var statistics = new WorkerStatistics(steps, sampler.Step, 1, sampler.LogLikelihood(0), sampler.GetStatistics().ColdAcceptanceRate, clock.Elapsed);
         return new WorkerUpdate(_template, block, statistics);
     }
 
@@ -219,18 +219,6 @@ internal sealed class InspiralWorker : IFitWorker
         var logLikelihoods = new double[state.LogLikelihoods.Length];
         for (int c = 0; c < logLikelihoods.Length; c++) logLikelihoods[c] = model.LogLikelihood(state.Positions.AsSpan(c * d, d));
         return state with { LogLikelihoods = logLikelihoods };
-    }
-
-    private static double ColdAcceptance(ParallelTemperingSampler<InspiralFitModel> sampler)
-    {
-        long proposed = 0, accepted = 0;
-        foreach (var proposal in sampler.GetStatistics().Proposals)
-        {
-            if (proposal.TemperatureIndex != 0) continue;
-            proposed += proposal.Proposed;
-            accepted += proposal.Accepted;
-        }
-        return proposed == 0 ? 0.0 : (double)accepted / proposed;
     }
 
     // Keeps the first cold replica's state after every step, in physical columns.

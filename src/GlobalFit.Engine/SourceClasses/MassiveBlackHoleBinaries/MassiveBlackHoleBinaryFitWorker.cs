@@ -165,7 +165,7 @@ public sealed class MassiveBlackHoleBinaryFitWorker : IFitWorker
         _state = state with { Updates = state.Updates + 1, Reference = nextReference, Recentres = recentres, Sampler = sampler.CaptureState() };
         _template = Render(MassiveBlackHoleBinaryParameters.FromSpan(sampler.Position(0)));
         clock.Stop();
-        var statistics = new WorkerStatistics(steps, sampler.Step, 1, sampler.LogLikelihood(0), ColdAcceptance(sampler), clock.Elapsed);
+        var statistics = new WorkerStatistics(steps, sampler.Step, 1, sampler.LogLikelihood(0), sampler.GetStatistics().ColdAcceptanceRate, clock.Elapsed);
         return new WorkerUpdate(_template, collector.ToBlock(Id), statistics);
     }
 
@@ -243,18 +243,6 @@ public sealed class MassiveBlackHoleBinaryFitWorker : IFitWorker
         var logLikelihoods = new double[chains];
         for (int c = 0; c < chains; c++) logLikelihoods[c] = target.LogLikelihood(state.Positions.AsSpan(c * 11, 11));
         return state with { LogLikelihoods = logLikelihoods };
-    }
-
-    private static double ColdAcceptance(ParallelTemperingSampler<MassiveBlackHoleBinaryTarget> sampler)
-    {
-        long proposed = 0, accepted = 0;
-        foreach (var proposal in sampler.GetStatistics().Proposals)
-        {
-            if (proposal.TemperatureIndex != 0) continue;
-            proposed += proposal.Proposed;
-            accepted += proposal.Accepted;
-        }
-        return proposed == 0 ? 0.0 : (double)accepted / proposed;
     }
 
     // The Fisher matrix is built on the first refresh of any chain's Fisher proposal in an update, not before: most

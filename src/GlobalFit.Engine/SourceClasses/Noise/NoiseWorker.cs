@@ -193,7 +193,7 @@ public sealed class NoiseWorker : IFitWorker, IPsdSource
         _state = _state with { Updates = _state.Updates + 1, Sampler = sampler.CaptureState() };
         SetLevels(sampler.Position(0));
         clock.Stop();
-        var statistics = new WorkerStatistics(steps, sampler.Step, 0, sampler.LogLikelihood(0), ColdAcceptance(sampler), clock.Elapsed);
+        var statistics = new WorkerStatistics(steps, sampler.Step, 0, sampler.LogLikelihood(0), sampler.GetStatistics().ColdAcceptanceRate, clock.Elapsed);
         return new NoiseUpdate(collector.ToBlock(), statistics, _levels);
     }
 
@@ -249,18 +249,6 @@ public sealed class NoiseWorker : IFitWorker, IPsdSource
         _aeModel = new AetNoiseModel(new InstrumentNoiseSettings(_levels.AccelerationAsdAe, _levels.OmsAsdAe),
             _settings.Foreground ? new GalacticConfusionSettings(_settings.ForegroundFitYears, _levels.ForegroundAmplitude) : null);
         _tModel = new InstrumentNoiseModel(new InstrumentNoiseSettings(_levels.AccelerationAsdT, _levels.OmsAsdT));
-    }
-
-    private static double ColdAcceptance(ParallelTemperingSampler<NoiseLevelModel> sampler)
-    {
-        long proposed = 0, accepted = 0;
-        foreach (var proposal in sampler.GetStatistics().Proposals)
-        {
-            if (proposal.TemperatureIndex != 0) continue;
-            proposed += proposal.Proposed;
-            accepted += proposal.Accepted;
-        }
-        return proposed == 0 ? 0.0 : (double)accepted / proposed;
     }
 
     // Keeps the first cold replica's state every interval-th step of the worker's life, in reported units.

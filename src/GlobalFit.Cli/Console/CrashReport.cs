@@ -19,8 +19,8 @@ public static class CrashReport
         ArgumentNullException.ThrowIfNull(args);
         try
         {
-            string stamp = DateTime.UtcNow.ToString("yyyyMMdd'T'HHmmss'Z'", CultureInfo.InvariantCulture);
-            string path = Path.Combine(folder ?? Path.GetTempPath(), $"globalfit-crash-{stamp}-{Environment.ProcessId}.log");
+            string utcTime = DateTime.UtcNow.ToString("yyyyMMdd'T'HHmmss'Z'", CultureInfo.InvariantCulture);
+            string path = Path.Combine(folder ?? Path.GetTempPath(), $"globalfit-crash-{utcTime}-{Environment.ProcessId}.log");
             File.WriteAllText(path, $"""
                 {ProgramInfo.Generator} crashed at {UtcText.Format(DateTimeOffset.UtcNow)}
                 command line: globalfit {string.Join(' ', args)}

@@ -68,18 +68,19 @@ public static partial class FitRunner
         var layout = RunFolderLayout.OpenExisting(runFolder);
         using var runLock = RunLock.Acquire(layout);
         string resolved = File.ReadAllText(layout.ResolvedConfig);
+        var plan = RunPlan.Load(layout.ResolvedConfig, options.Registry);
         // Checked before anything in the folder changes (run.toml included): a refused resume leaves the run as it was.
-        var identity = DataIdentity.Verify(layout, RunPlan.Load(layout.ResolvedConfig, options.Registry).Settings.DataPath, options.AcceptNewData, options.Progress.Warning);
+        var identity = DataIdentity.Verify(layout, plan.Settings.DataPath, options.AcceptNewData, options.Progress.Warning);
         if (iterations is { } total)
         {
             long done = CheckpointFile.Exists(layout.Root) ? CheckpointFile.Read(layout.Root, options.Progress.Warning).Iteration : 0;
             if (total < Math.Max(1, done))
                 throw new InvalidInputException("--iterations", null, $"must be at least the {Math.Max(1, done)} iterations already checkpointed, got {total}");
             resolved = WithIterations(resolved, total, layout.ResolvedConfig);
-            RunPlan.FromConfig(Configuration.ConfigDocument.Parse(resolved, layout.ResolvedConfig), layout.Root, options.Registry); // checks the new total before anything is written
+            // The new total is checked before anything is written.
+            plan = RunPlan.FromConfig(Configuration.ConfigDocument.Parse(resolved, layout.ResolvedConfig), layout.Root, options.Registry);
             AtomicFile.Write(layout.ResolvedConfig, overwrite: true, stream => stream.Write(Encoding.UTF8.GetBytes(resolved)));
         }
-        var plan = RunPlan.Load(layout.ResolvedConfig, options.Registry);
         if (plan.Settings.RunFolder != layout.Root)
             throw new InvalidInputException(layout.ResolvedConfig, "key 'run_folder'", $"names {plan.Settings.RunFolder}, but the run is in {layout.Root}; a moved run folder must have run_folder updated");
         string digest = Digest(resolved);

@@ -11,14 +11,14 @@ public sealed class ObservationProvenance
     /// <summary>Creates a provenance record.</summary>
     /// <param name="generator">The writing program and its version, e.g. <c>globalfit 0.1.0</c>; not empty.</param>
     /// <param name="createdUtc">When the data were made; stored as UTC.</param>
-    /// <param name="entries">Free-form notes; keys are non-empty, without '/' or control characters; values are any text.</param>
+    /// <param name="notes">Free-form notes; keys are non-empty, without '/' or control characters; values are any text.</param>
     /// <exception cref="ArgumentException">The generator is empty, or a key is empty, repeated or contains '/' or a control character.</exception>
-    public ObservationProvenance(string generator, DateTimeOffset createdUtc, IEnumerable<KeyValuePair<string, string>> entries)
+    public ObservationProvenance(string generator, DateTimeOffset createdUtc, IEnumerable<KeyValuePair<string, string>> notes)
     {
         ArgumentException.ThrowIfNullOrWhiteSpace(generator);
-        ArgumentNullException.ThrowIfNull(entries);
+        ArgumentNullException.ThrowIfNull(notes);
         var builder = ImmutableSortedDictionary.CreateBuilder<string, string>(StringComparer.Ordinal);
-        foreach (var (key, value) in entries)
+        foreach (var (key, value) in notes)
         {
             if (string.IsNullOrEmpty(key) || key.Contains('/') || key.Any(char.IsControl))
                 throw new ArgumentException($"provenance key '{key}' must be non-empty and free of '/' and control characters");

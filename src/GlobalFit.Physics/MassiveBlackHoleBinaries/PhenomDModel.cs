@@ -134,10 +134,10 @@ public readonly struct PhenomDModel
 
         // Peak of the merger–ringdown Lorentzian (root of its derivative nearest f_RD). For γ2 ≥ 1 the ansatz has no
         // interior maximum; the limit γ2 → 1 of the formula is used there (our safeguard, not from the paper).
-        double fRd = RingdownFrequency, fDamp = DampingFrequency;
+        double fRd = RingdownFrequency, fDecay = DampingFrequency;
         PeakFrequency = _gamma2 < 1.0
-            ? Math.Abs(fRd + fDamp * _gamma3 * (Math.Sqrt(1.0 - _gamma2 * _gamma2) - 1.0) / _gamma2)
-            : Math.Abs(fRd - fDamp * _gamma3 / _gamma2);
+            ? Math.Abs(fRd + fDecay * _gamma3 * (Math.Sqrt(1.0 - _gamma2 * _gamma2) - 1.0) / _gamma2)
+            : Math.Abs(fRd - fDecay * _gamma3 / _gamma2);
 
         // Intermediate amplitude: collocation (Khan16 Sec. V) on the reduced amplitude A/A0.
         _d0 = _d1 = _d2 = _d3 = _d4 = 0;
@@ -162,9 +162,9 @@ public readonly struct PhenomDModel
         _beta0 = eta * InspiralPhase(fJoin1) - _beta1 * fJoin1 - _beta2 * Math.Log(fJoin1) + _beta3 / (3.0 * fJoin1 * fJoin1 * fJoin1);
         double fJoin2 = MergerPhaseStart;
         _alpha1 = eta * IntermediatePhaseDerivative(fJoin2) - _alpha2 / (fJoin2 * fJoin2) - _alpha3 * Math.Pow(fJoin2, -0.25)
-            - _alpha4 * fDamp / (fDamp * fDamp + (fJoin2 - _alpha5 * fRd) * (fJoin2 - _alpha5 * fRd));
+            - _alpha4 * fDecay / (fDecay * fDecay + (fJoin2 - _alpha5 * fRd) * (fJoin2 - _alpha5 * fRd));
         _alpha0 = eta * IntermediatePhase(fJoin2) - _alpha1 * fJoin2 + _alpha2 / fJoin2 - 4.0 / 3.0 * _alpha3 * Math.Pow(fJoin2, 0.75)
-            - _alpha4 * Math.Atan((fJoin2 - _alpha5 * fRd) / fDamp);
+            - _alpha4 * Math.Atan((fJoin2 - _alpha5 * fRd) / fDecay);
 
         // Our time and phase origin: φ = dφ/df = 0 at the amplitude peak.
         double peakSlope = RawPhaseDerivative(PeakFrequency);
@@ -330,17 +330,17 @@ public readonly struct PhenomDModel
 
     internal double MergerPhase(double f)
     {
-        double fDamp = DampingFrequency;
+        double fDecay = DampingFrequency;
         return (_alpha0 + _alpha1 * f - _alpha2 / f + 4.0 / 3.0 * _alpha3 * Math.Pow(f, 0.75)
-            + _alpha4 * Math.Atan((f - _alpha5 * RingdownFrequency) / fDamp)) / SymmetricMassRatio;
+            + _alpha4 * Math.Atan((f - _alpha5 * RingdownFrequency) / fDecay)) / SymmetricMassRatio;
     }
 
     internal double MergerPhaseDerivative(double f)
     {
-        double fDamp = DampingFrequency;
+        double fDecay = DampingFrequency;
         double offset = f - _alpha5 * RingdownFrequency;
         return (_alpha1 + _alpha2 / (f * f) + _alpha3 / Math.Sqrt(Math.Sqrt(f))
-            + _alpha4 * fDamp / (fDamp * fDamp + offset * offset)) / SymmetricMassRatio;
+            + _alpha4 * fDecay / (fDecay * fDecay + offset * offset)) / SymmetricMassRatio;
     }
 
     /// <summary>TaylorF2 phase plus the σ terms (Khan16 Eq. B6 and Sec. IV), and its derivative.</summary>

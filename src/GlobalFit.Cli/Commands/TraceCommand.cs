@@ -54,6 +54,8 @@ public static class TraceCommand
         {
             string share = i.OverheadFractionOfCompute is double f ? I($" ({100 * f:F1} % of {i.WorkerComputeMs:F1} ms worker compute)") : "";
             o.WriteLine(I($"iteration {i.Iteration}   {i.DurationMs:F1} ms, orchestration overhead {i.OverheadMs:F1} ms{share}"));
+            if (i.Breakdown is { } b)
+                o.WriteLine(I($"  kernel      {b.KernelMs:F1} ms of {b.ComputeMs:F1} ms compute in {b.Updates} measured update(s): efficiency {100 * b.Efficiency:F1} %"));
             foreach (var s in i.Stages)
             {
                 if (s.CriticalWorkerId is null)
@@ -72,6 +74,22 @@ public static class TraceCommand
             + (m.MeanOverheadPercentOfCompute is double c ? I($", {c:F1} % of worker compute") : ""));
         foreach (var w in m.MostOftenCritical.Take(TextSummaryWorkers))
             o.WriteLine(I($"  last in {w.Stages,4} stage(s)   {Named(w.WorkerId, w.Label)}"));
+        if (m.Breakdown is { } total) WriteBreakdown(o, total);
+    }
+
+    // Where the measured updates' compute went, part by part, largest first; the kernel's share is the efficiency.
+    private static void WriteBreakdown(TextWriter o, WorkerTimeBreakdown b)
+    {
+        string I(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
+        o.WriteLine(I($"worker time   {b.Updates} measured update(s), {b.ComputeMs:F1} ms compute; kernel (template + likelihood) {b.KernelMs:F1} ms = efficiency {100 * b.Efficiency:F1} %"));
+        foreach (var p in b.Phases.Where(p => p.Milliseconds > 0 || p.Count > 0).OrderByDescending(p => p.Milliseconds))
+        {
+            double share = b.ComputeMs > 0 ? 100 * p.Milliseconds / b.ComputeMs : 0;
+            string each = p.Count > 0 ? I($", {p.Count} × {1000 * p.Milliseconds / p.Count:F2} µs") : "";
+            o.WriteLine(I($"  {p.Name,-20} {p.Milliseconds,10:F1} ms {share,5:F1} %{each}"));
+        }
+        double state = b.ComputeMs > 0 ? 100 * b.StateMs / b.ComputeMs : 0;
+        o.WriteLine(I($"  {"state_serialisation",-20} {b.StateMs,10:F1} ms {state,5:F1} %"));
     }
 
     // The opaque id with what the worker covers beside it: "galactic_binaries/0003 [2.9700-3.0086 mHz]".

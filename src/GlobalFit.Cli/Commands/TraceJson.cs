@@ -18,6 +18,7 @@ internal static class TraceJson
             ["worker_compute_ms"] = i.WorkerComputeMs,
             ["overhead_ms"] = i.OverheadMs,
             ["overhead_fraction_of_compute"] = i.OverheadFractionOfCompute,
+            ["worker_time"] = Breakdown(i.Breakdown),
             ["stages"] = i.Stages.Select(s => new Dictionary<string, object?>
             {
                 ["stage"] = s.StageIndex + 1,
@@ -38,6 +39,7 @@ internal static class TraceJson
             ["mean_overhead_ms"] = report.Summary.MeanOverheadMs,
             ["mean_overhead_percent_of_iteration"] = report.Summary.MeanOverheadPercentOfIteration,
             ["mean_overhead_percent_of_compute"] = report.Summary.MeanOverheadPercentOfCompute,
+            ["worker_time"] = Breakdown(report.Summary.Breakdown),
             ["most_often_last"] = report.Summary.MostOftenCritical.Select(c => new Dictionary<string, object?>
             {
                 ["worker"] = c.WorkerId,
@@ -45,5 +47,21 @@ internal static class TraceJson
                 ["stages"] = c.Stages,
             }).ToArray(),
         },
+    };
+
+    // Null when no worker update measured its parts.
+    private static Dictionary<string, object?>? Breakdown(WorkerTimeBreakdown? b) => b is null ? null : new()
+    {
+        ["updates"] = b.Updates,
+        ["compute_ms"] = b.ComputeMs,
+        ["kernel_ms"] = b.KernelMs,
+        ["state_serialisation_ms"] = b.StateMs,
+        ["efficiency"] = b.Efficiency,
+        ["phases"] = b.Phases.Select(p => new Dictionary<string, object?>
+        {
+            ["phase"] = p.Name,
+            ["ms"] = p.Milliseconds,
+            ["count"] = p.Count,
+        }).ToArray(),
     };
 }

@@ -52,9 +52,12 @@ public sealed class WorkerActor : ReceiveActor
         var handovers = worker.TakeHandovers();
         if (handovers.Count > 0) update = update with { Template = worker.CurrentTemplate() };
         update = update with { Samples = update.Samples with { Iteration = request.Iteration } };
+        long saving = Stopwatch.GetTimestamp();
         byte[] state = worker.SaveState();
         long finished = Stopwatch.GetTimestamp();
         var statistics = update.Statistics;
+        FitTelemetry.RecordWorkerPhases(span, [.. statistics.Phases.Select(p => (p.Name, p.Milliseconds, p.Count, p.IsKernel))],
+            Stopwatch.GetElapsedTime(saving, finished).TotalMilliseconds);
         FitTelemetry.RecordWorkerResult(span, _workerId, statistics.SourceCount,
             statistics.Steps, statistics.Acceptance, Stopwatch.GetElapsedTime(started, finished).TotalMilliseconds,
             Stopwatch.GetElapsedTime(request.SentTimestamp, started).TotalMilliseconds);

@@ -1,3 +1,5 @@
+using System.Collections.Immutable;
+
 namespace GlobalFit.Engine.Fitting;
 
 /// <summary>What one worker update did, for progress lines, telemetry and <c>status</c>.</summary>
@@ -7,4 +9,9 @@ namespace GlobalFit.Engine.Fitting;
 /// <param name="LogLikelihood">ln L of the first cold chain at the end.</param>
 /// <param name="Acceptance">Fraction of cold-chain proposals accepted during the worker's life, in [0, 1].</param>
 /// <param name="WallTime">Wall-clock time of the update; the only field that differs between identical runs.</param>
-public sealed record WorkerStatistics(int Steps, long TotalSteps, int SourceCount, double LogLikelihood, double Acceptance, TimeSpan WallTime);
+public sealed record WorkerStatistics(int Steps, long TotalSteps, int SourceCount, double LogLikelihood, double Acceptance, TimeSpan WallTime)
+{
+    /// <summary>Where the update's time went, part by part (empty for a worker that does not measure it). Like
+    /// <see cref="WallTime"/> it differs between identical runs.</summary>
+    public ImmutableArray<WorkerPhaseTime> Phases { get; init; } = [];
+}

@@ -49,7 +49,8 @@ public static class CriticalPathAnalysis
             iterations.Average(i => i.DurationMs),
             iterations.Average(i => i.OverheadMs),
             100 * iterations.Average(i => i.DurationMs > 0 ? i.OverheadMs / i.DurationMs : 0),
-            withCompute.Count == 0 ? null : 100 * withCompute.Average(i => i.OverheadFractionOfCompute!.Value));
+            withCompute.Count == 0 ? null : 100 * withCompute.Average(i => i.OverheadFractionOfCompute!.Value),
+            WorkerTimeBreakdown.Sum(iterations.Select(i => i.Breakdown)));
     }
 
     private static List<TelemetrySpan> ReadSpans(string path)
@@ -101,11 +102,14 @@ public static class CriticalPathAnalysis
             // Without the thread count (older files) a stage's least time is its slowest worker alone.
             double threads = iteration.OptionalDouble(FitTelemetry.ThreadsAttribute) ?? double.PositiveInfinity;
             var stages = new List<StageCriticalPath>();
+            var breakdowns = new List<WorkerTimeBreakdown?>();
             double compute = 0;
             foreach (var stage in children[(iteration.TraceId, iteration.SpanId)].Where(s => s.Name == FitTelemetry.StageSpan))
             {
                 int index = checked((int)stage.RequireLong(FitTelemetry.StageIndexAttribute, path));
-                var workers = children[(stage.TraceId, stage.SpanId)].Where(s => s.Name == FitTelemetry.WorkerUpdateSpan)
+                var updates = children[(stage.TraceId, stage.SpanId)].Where(s => s.Name == FitTelemetry.WorkerUpdateSpan).ToList();
+                breakdowns.AddRange(updates.Select(Breakdown));
+                var workers = updates
                     .Select(w => (Id: w.RequireText(FitTelemetry.WorkerIdAttribute, path), End: w.EndUtc,
                                   WallMs: w.OptionalDouble(FitTelemetry.WorkerWallMsAttribute) ?? w.DurationMs,
                                   Label: w.OptionalText(FitTelemetry.WorkerLabelAttribute)))
@@ -116,9 +120,27 @@ public static class CriticalPathAnalysis
             stages.Sort((a, b) => a.StageIndex.CompareTo(b.StageIndex));
             double overhead = iteration.DurationMs - stages.Sum(s => s.LeastMs);
             iterations.Add(new IterationCriticalPath(number, iteration.TraceId, iteration.StartUtc, iteration.DurationMs, stages, compute, overhead,
-                compute > 0 ? overhead / compute : null));
+                compute > 0 ? overhead / compute : null, WorkerTimeBreakdown.Sum(breakdowns)));
         }
         return iterations;
+    }
+
+    // A worker update's own breakdown: its globalfit.worker.phase.NAME_ms/_count pairs, kernel and state times; null for an
+    // update that did not measure its parts (no kernel_ms attribute).
+    private static WorkerTimeBreakdown? Breakdown(TelemetrySpan span)
+    {
+        if (span.OptionalDouble(FitTelemetry.WorkerKernelMsAttribute) is not double kernel) return null;
+        var phases = new List<WorkerPhaseTotal>();
+        foreach (var (name, _) in span.Attributes)
+        {
+            if (!name.StartsWith(FitTelemetry.WorkerPhaseAttributePrefix, StringComparison.Ordinal) || !name.EndsWith("_ms", StringComparison.Ordinal)) continue;
+            string phase = name[FitTelemetry.WorkerPhaseAttributePrefix.Length..^3];
+            double ms = span.OptionalDouble(name) ?? 0;
+            double count = span.OptionalDouble(FitTelemetry.WorkerPhaseAttributePrefix + phase + "_count") ?? 0;
+            phases.Add(new WorkerPhaseTotal(phase, ms, (long)count));
+        }
+        return new WorkerTimeBreakdown(1, span.OptionalDouble(FitTelemetry.WorkerWallMsAttribute) ?? span.DurationMs, kernel,
+            span.OptionalDouble(FitTelemetry.WorkerStateMsAttribute) ?? 0, phases);
     }
 
     private static StageCriticalPath Stage(int index, List<(string Id, DateTimeOffset End, double WallMs, string? Label)> byFinishDescending, double threads)

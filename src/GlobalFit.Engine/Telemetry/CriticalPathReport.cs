@@ -27,8 +27,11 @@ public sealed record StageCriticalPath(int StageIndex, int WorkerCount, string? 
 /// (<see cref="StageCriticalPath.LeastMs"/>): residual updates, messaging, catalogue appends, checkpoints and imperfect
 /// scheduling — what a perfect scheduler of the same compute would save.</param>
 /// <param name="OverheadFractionOfCompute">Overhead / total worker compute; null when no compute was recorded.</param>
+/// <param name="Breakdown">Where the compute of the worker updates that measure their parts went (galactic-binary band
+/// workers do); null when none did.</param>
 public sealed record IterationCriticalPath(long Iteration, string TraceId, DateTimeOffset StartUtc, double DurationMs,
-    IReadOnlyList<StageCriticalPath> Stages, double WorkerComputeMs, double OverheadMs, double? OverheadFractionOfCompute);
+    IReadOnlyList<StageCriticalPath> Stages, double WorkerComputeMs, double OverheadMs, double? OverheadFractionOfCompute,
+    WorkerTimeBreakdown? Breakdown = null);
 
 /// <summary>How often a worker was the last of its stage.</summary>
 /// <param name="WorkerId">The worker.</param>
@@ -44,8 +47,9 @@ public sealed record CriticalWorkerCount(string WorkerId, int Stages, string? La
 /// <param name="MeanOverheadPercentOfIteration">Mean of overhead / duration, in percent; null without iterations.</param>
 /// <param name="MeanOverheadPercentOfCompute">Mean of overhead / total worker compute, in percent, over the iterations that
 /// recorded compute; null if none did.</param>
+/// <param name="Breakdown">The iterations' breakdowns summed; null when none had one.</param>
 public sealed record CriticalPathSummary(int IterationCount, IReadOnlyList<CriticalWorkerCount> MostOftenCritical, double? MeanIterationMs,
-    double? MeanOverheadMs, double? MeanOverheadPercentOfIteration, double? MeanOverheadPercentOfCompute);
+    double? MeanOverheadMs, double? MeanOverheadPercentOfIteration, double? MeanOverheadPercentOfCompute, WorkerTimeBreakdown? Breakdown = null);
 
 /// <summary>The critical-path analysis of a telemetry file.</summary>
 /// <param name="TelemetryPath">The file read.</param>

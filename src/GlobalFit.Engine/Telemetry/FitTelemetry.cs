@@ -52,6 +52,17 @@ public static class FitTelemetry
     /// <summary>Compute time of the update in milliseconds (excluding queueing and messaging).</summary>
     public const string WorkerWallMsAttribute = "globalfit.worker.wall_ms";
 
+    /// <summary>Prefix of the time-breakdown attributes of a worker update: <c>globalfit.worker.phase.NAME_ms</c> (time in the
+    /// part) and <c>globalfit.worker.phase.NAME_count</c> (how often it ran), for each part the worker measures.</summary>
+    public const string WorkerPhaseAttributePrefix = "globalfit.worker.phase.";
+
+    /// <summary>Milliseconds of the update spent in the template + log-likelihood kernel (the sum of the kernel parts of the
+    /// breakdown); over <see cref="WorkerWallMsAttribute"/> it is the worker's efficiency.</summary>
+    public const string WorkerKernelMsAttribute = "globalfit.worker.kernel_ms";
+
+    /// <summary>Milliseconds spent serialising the worker's state after the update (included in the compute time).</summary>
+    public const string WorkerStateMsAttribute = "globalfit.worker.state_ms";
+
     /// <summary>Threads of the compute dispatcher (iteration span): a stage cannot take less than its total compute
     /// divided by this.</summary>
     public const string ThreadsAttribute = "globalfit.threads";
@@ -138,6 +149,28 @@ public static class FitTelemetry
             .SetTag(WorkerWallMsAttribute, wallMs)
             .SetTag(WorkerQueueMsAttribute, queueMs);
         WorkerCompute.Record(wallMs, new KeyValuePair<string, object?>(WorkerIdAttribute, workerId));
+    }
+
+    /// <summary>Adds an update's time breakdown to its span (if any): one <c>_ms</c> and one <c>_count</c> attribute per
+    /// part under <see cref="WorkerPhaseAttributePrefix"/>, the kernel total and the state serialisation time.</summary>
+    /// <param name="span">The worker-update span, or null.</param>
+    /// <param name="phases">The parts (may be empty): snake_case name, milliseconds, count, and whether the part belongs to
+    /// the kernel.</param>
+    /// <param name="stateMs">Time spent serialising the state, ms.</param>
+    public static void RecordWorkerPhases(Activity? span, IReadOnlyList<(string Name, double Milliseconds, long Count, bool IsKernel)> phases, double stateMs)
+    {
+        ArgumentNullException.ThrowIfNull(phases);
+        if (span is null) return;
+        span.SetTag(WorkerStateMsAttribute, stateMs);
+        if (phases.Count == 0) return;
+        double kernel = 0;
+        foreach (var phase in phases)
+        {
+            span.SetTag(WorkerPhaseAttributePrefix + phase.Name + "_ms", phase.Milliseconds);
+            span.SetTag(WorkerPhaseAttributePrefix + phase.Name + "_count", phase.Count);
+            if (phase.IsKernel) kernel += phase.Milliseconds;
+        }
+        span.SetTag(WorkerKernelMsAttribute, kernel);
     }
 
     /// <summary>Records a worker failure as a span of its own (<c>fit.worker_failure</c>) carrying the exception, stack

@@ -46,6 +46,38 @@ public class TraceCommandTests
         return run;
     }
 
+    // A band update that measured its parts: 200 ms compute of which 50 ms kernel (template 40 + likelihood 10).
+    private static readonly string[] MeasuredLines =
+    [
+        Span("fit.iteration", "t1", "i1", null, "00.000", 300, "\"globalfit.iteration\":1"),
+        Span("fit.stage", "t1", "s0", "i1", "00.000", 250, "\"globalfit.stage.index\":0"),
+        Span("fit.worker_update", "t1", "w1", "s0", "00.000", 210, "\"globalfit.worker.id\":\"galactic_binaries/0000\",\"globalfit.worker.wall_ms\":200,"
+            + "\"globalfit.worker.kernel_ms\":50,\"globalfit.worker.state_ms\":4,\"globalfit.worker.phase.template_ms\":40,\"globalfit.worker.phase.template_count\":1000,"
+            + "\"globalfit.worker.phase.likelihood_ms\":10,\"globalfit.worker.phase.likelihood_count\":1000,\"globalfit.worker.phase.fisher_ms\":120,\"globalfit.worker.phase.fisher_count\":30"),
+    ];
+
+    [Fact]
+    public void Text_and_json_show_where_the_measured_worker_time_went_and_the_kernel_efficiency()
+    {
+        using var run = RunWith(MeasuredLines);
+        var text = CliRun.Run("trace", run.Path);
+        Assert.Equal(0, text.ExitCode);
+        Assert.Contains("kernel      50.0 ms of 200.0 ms compute in 1 measured update(s): efficiency 25.0 %", text.Out);
+        Assert.Contains("worker time   1 measured update(s), 200.0 ms compute; kernel (template + likelihood) 50.0 ms = efficiency 25.0 %", text.Out);
+        // Largest part first, with its share of compute and its time per run: 120 ms / 30 = 4000 µs.
+        Assert.Matches(@"fisher\s+120\.0 ms\s+60\.0 %, 30 × 4000\.00 µs", text.Out);
+        Assert.Matches(@"state_serialisation\s+4\.0 ms\s+2\.0 %", text.Out);
+
+        var json = CliRun.Run("trace", run.Path, "--json");
+        using var document = JsonDocument.Parse(json.Out);
+        var time = document.RootElement.GetProperty("summary").GetProperty("worker_time");
+        Assert.Equal(0.25, time.GetProperty("efficiency").GetDouble(), 12);
+        Assert.Equal(4, time.GetProperty("state_serialisation_ms").GetDouble());
+        var fisher = time.GetProperty("phases").EnumerateArray().Single(p => p.GetProperty("phase").GetString() == "fisher");
+        Assert.Equal((120.0, 30L), (fisher.GetProperty("ms").GetDouble(), fisher.GetProperty("count").GetInt64()));
+        Assert.Equal(JsonValueKind.Object, document.RootElement.GetProperty("iterations")[0].GetProperty("worker_time").ValueKind);
+    }
+
     [Fact]
     public void Text_output_names_the_last_worker_of_each_stage_its_lead_and_the_wait_of_the_others()
     {

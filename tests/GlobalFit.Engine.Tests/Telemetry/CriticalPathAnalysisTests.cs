@@ -67,6 +67,41 @@ public class CriticalPathAnalysisTests
         Assert.Equal(65.0 / 230, first.OverheadFractionOfCompute!.Value, 1e-12);
     }
 
+    // Two band updates that measured their parts (80 and 20 ms of compute) and a noise update that did not.
+    [Fact]
+    public void Worker_time_breakdown_sums_the_parts_of_the_updates_that_measured_them()
+    {
+        using var run = new TemporaryRunFolder();
+        string Measured(string id, string worker, double wall, double kernel, double template, double fisher) =>
+            Span("fit.worker_update", "t1", id, "s0", 0, wall + 1,
+                $$"""{"globalfit.iteration":1,"globalfit.stage.index":0,"globalfit.worker.id":"{{worker}}","globalfit.worker.wall_ms":{{wall}},"globalfit.worker.kernel_ms":{{kernel}},"globalfit.worker.state_ms":1.5,"globalfit.worker.phase.template_ms":{{template}},"globalfit.worker.phase.template_count":10,"globalfit.worker.phase.fisher_ms":{{fisher}},"globalfit.worker.phase.fisher_count":3}""");
+        string[] lines =
+        [
+            Span("fit.iteration", "t1", "i1", null, 0, 200, """{"globalfit.iteration":1}"""),
+            Span("fit.stage", "t1", "s0", "i1", 0, 102, """{"globalfit.iteration":1,"globalfit.stage.index":0}"""),
+            Measured("w1", "galactic_binaries/a", 80, 30, 25, 40),
+            Measured("w2", "galactic_binaries/b", 20, 10, 8, 5),
+            Worker("t1", "w3", "s0", "noise", 0, 50, 45),
+        ];
+        var report = CriticalPathAnalysis.Read(WriteFile(run, lines));
+
+        var b = report.Iterations[0].Breakdown!;
+        // Sums over the two measured updates only (the noise update carries no kernel_ms): compute 80 + 20, kernel 30 + 10.
+        Assert.Equal((2, 100.0, 40.0, 3.0), (b.Updates, b.ComputeMs, b.KernelMs, b.StateMs));
+        Assert.Equal(0.4, b.Efficiency!.Value, 1e-12);
+        Assert.Equal([("template", 33.0, 20L), ("fisher", 45.0, 6L)], b.Phases.Select(p => (p.Name, p.Milliseconds, p.Count)));
+        Assert.Equal(b, report.Summary.Breakdown! with { Phases = b.Phases });
+    }
+
+    [Fact]
+    public void Files_without_worker_breakdowns_have_none()
+    {
+        using var run = new TemporaryRunFolder();
+        var report = CriticalPathAnalysis.Read(WriteFile(run, Lines));
+        Assert.All(report.Iterations, i => Assert.Null(i.Breakdown));
+        Assert.Null(report.Summary.Breakdown);
+    }
+
     [Fact]
     public void The_summary_counts_critical_workers_and_averages_the_overhead()
     {

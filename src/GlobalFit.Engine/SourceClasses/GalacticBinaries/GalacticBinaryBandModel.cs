@@ -49,6 +49,9 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
         _current = new CachedTemplate[maxSources];
     }
 
+    /// <summary>Where the model's time is accumulated (template, likelihood, assembly and pair terms).</summary>
+    internal BandUpdateClock Clock { get; set; } = new();
+
     /// <inheritdoc />
     public ParameterSchema SourceSchema => _prior.Schema;
 
@@ -71,6 +74,9 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
     public double LogLikelihood(ReadOnlySpan<double> sources, int count)
     {
         if (count > _current.Length) return double.NegativeInfinity;
+        var clock = Clock;
+        long started = BandUpdateClock.Now();
+        long kernelBefore = clock.Ticks(BandUpdatePhase.Template) + clock.Ticks(BandUpdatePhase.Likelihood);
         if (_cache.Count + count > _cacheCapacity) EmptyCache();
         double sum = 0;
         for (int j = 0; j < count; j++)
@@ -79,10 +85,14 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
             _current[j] = template;
             sum += template.DataOverlap - 0.5 * template.SquaredNorm;
         }
+        long assembled = clock.Add(BandUpdatePhase.LikelihoodAssembly, started);
+        clock.AddTicks(BandUpdatePhase.LikelihoodAssembly,
+            kernelBefore - clock.Ticks(BandUpdatePhase.Template) - clock.Ticks(BandUpdatePhase.Likelihood));
         for (int j = 0; j < count; j++)
             for (int l = j + 1; l < count; l++)
                 sum -= CrossTerm(_current[j], _current[l]);
         Array.Clear(_current, 0, count);
+        clock.Add(BandUpdatePhase.PairTerms, assembled);
         return sum;
     }
 
@@ -138,6 +148,7 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
     {
         var key = new SourceKey(values);
         if (_cache.TryGetValue(key, out var cached)) return cached;
+        long started = BandUpdateClock.Now();
         // A cached template holds only its overlap with the band, so the band's width bounds it (a year-long template
         // can be 4096 bins; a band window is a few hundred).
         var template = _pool.Count > 0 ? _pool.Pop() : new CachedTemplate(Math.Min(_generator.MaximumEnvelopeLength, _band.Window.Count), _band.IncludesT);
@@ -149,6 +160,7 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
         view.A.Slice(from, overlap.Count).CopyTo(template.A);
         view.E.Slice(from, overlap.Count).CopyTo(template.E);
         if (_band.IncludesT) view.T.Slice(from, overlap.Count).CopyTo(template.T);
+        long rendered = Clock.Add(BandUpdatePhase.Template, started);
         double dataOverlap = 0, norm = 0;
         Accumulate(template, _band.DataA, _band.InverseA, template.A, ref dataOverlap, ref norm);
         Accumulate(template, _band.DataE, _band.InverseE, template.E, ref dataOverlap, ref norm);
@@ -156,6 +168,7 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
         template.DataOverlap = 4.0 * _band.DfHz * dataOverlap;
         template.SquaredNorm = 4.0 * _band.DfHz * norm;
         _cache.Add(key, template);
+        Clock.Add(BandUpdatePhase.Likelihood, rendered);
         return template;
     }
 

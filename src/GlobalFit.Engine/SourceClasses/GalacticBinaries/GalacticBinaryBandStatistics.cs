@@ -1,3 +1,5 @@
+using System.Collections.Immutable;
+using GlobalFit.Engine.Fitting;
 using GlobalFit.Inference.Diagnostics;
 
 namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
@@ -10,4 +12,9 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// <param name="WallTime">Wall-clock time of the update (the only field that differs between identical runs).</param>
 /// <param name="Sampler">Acceptance per move and rung (within-model moves by name, "birth", "death"), swap rates and
 /// ladder, cumulative over the worker's life.</param>
-public sealed record GalacticBinaryBandStatistics(int StepsThisUpdate, long TotalSteps, int SourceCount, double LogLikelihood, TimeSpan WallTime, SamplerStatistics Sampler);
+public sealed record GalacticBinaryBandStatistics(int StepsThisUpdate, long TotalSteps, int SourceCount, double LogLikelihood, TimeSpan WallTime, SamplerStatistics Sampler)
+{
+    /// <summary>Where the update's time went, part by part (<see cref="BandUpdateClock.Snapshot"/>); like
+    /// <see cref="WallTime"/>, it differs between identical runs.</summary>
+    public ImmutableArray<WorkerPhaseTime> Phases { get; init; } = [];
+}

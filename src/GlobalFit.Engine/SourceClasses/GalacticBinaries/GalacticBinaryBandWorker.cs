@@ -134,6 +134,15 @@ public sealed class GalacticBinaryBandWorker
         if (Math.Abs(residual.DfHz - Window.DfHz) > 1e-9 * Window.DfHz)
             throw new ArgumentException("residual bin spacing differs from the window's", nameof(residual));
         var clock = Stopwatch.StartNew();
+        var phases = new BandUpdateClock();
+        long mark = BandUpdateClock.Now(), nested = 0;
+        // Closes the part that ran since the last lap; parts nested in it (a Fisher matrix while a proposal is built, a
+        // likelihood while chains are re-scored) keep their own time.
+        void Lap(BandUpdatePhase phase)
+        {
+            mark = phases.AddExclusive(phase, mark, nested);
+            nested = phases.NestedTicks();
+        }
         using var tools = _tools.Rent();
         var generator = tools.Generator;
         var statistic = tools.Statistic;
@@ -142,27 +151,43 @@ public sealed class GalacticBinaryBandWorker
             : GalacticBinaryBandModel.AverageSnrPerUnitAmplitude(generator, residual, 0.5 * (Window.CoreStartHz + Window.CoreEndHz));
         int chains = _settings.TemperatureCount * _settings.ChainsPerTemperature;
         var model = new GalacticBinaryBandModel(generator, _prior, residual, snrScale, _settings.MaxSourcesPerWindow,
-            4 * chains * _settings.MaxSourcesPerWindow + 256);
+            4 * chains * _settings.MaxSourcesPerWindow + 256) { Clock = phases };
+        Lap(BandUpdatePhase.ModelSetup);
         // Births and the starting search cover the core only: a source enters a drift margin only by moving there, and is
         // handed to the neighbour that owns it; were births allowed in the margins, two windows would fit the same signal.
         var grid = FStatisticGrid.ForWindow(Window.Core, Window.DfHz, _settings.FStatisticCellsPerBin,
             _settings.MinFrequencyDerivativeHzS, _settings.MaxFrequencyDerivativeHzS, 1,
             _settings.FStatisticLatitudeCells, _settings.FStatisticLongitudeCells);
         var map = new FStatisticCellDensity(FStatisticMap.Compute(statistic, residual, grid), MapUniformFraction);
-        var birth = new GalacticBinaryBirthDensity(statistic, residual, map, snrScale);
-        var fisher = new GalacticBinarySourceFisher(generator, residual, snrScale, _prior.Schema);
+        Lap(BandUpdatePhase.FStatisticMap);
+        var birth = new GalacticBinaryBirthDensity(statistic, residual, map, snrScale) { Clock = phases };
+        var fisher = new GalacticBinarySourceFisher(generator, residual, snrScale, _prior.Schema) { Clock = phases };
         var samplerSettings = SamplerSettings(fisher, birth);
-        var start = _state.Sampler ?? Seeded(new ReversibleJumpSampler<GalacticBinaryBandModel>(model, birth, samplerSettings).CaptureState(),
-            GreedyFStatisticSearch.Run(statistic, residual, grid, _settings.MaxSourcesPerWindow), snrScale);
-        var sampler = ReversibleJumpSampler<GalacticBinaryBandModel>.Resume(model, birth, samplerSettings, Rescored(start, model));
-        var collector = new SampleCollector(_settings.SampleInterval, snrScale);
+        Lap(BandUpdatePhase.ProposalSetup);
+        var start = _state.Sampler;
+        if (start is null)
+        {
+            var empty = new ReversibleJumpSampler<GalacticBinaryBandModel>(model, birth, samplerSettings).CaptureState();
+            Lap(BandUpdatePhase.ModelSetup);
+            start = Seeded(empty, GreedyFStatisticSearch.Run(statistic, residual, grid, _settings.MaxSourcesPerWindow), snrScale);
+            Lap(BandUpdatePhase.GreedySearch);
+        }
+        var rescored = Rescored(start, model);
+        Lap(BandUpdatePhase.Rescoring);
+        var sampler = ReversibleJumpSampler<GalacticBinaryBandModel>.Resume(model, birth, samplerSettings, rescored);
+        var collector = new SampleCollector(_settings.SampleInterval, snrScale, phases);
+        Lap(BandUpdatePhase.ModelSetup);
         sampler.Advance(steps, collector);
+        Lap(BandUpdatePhase.Proposals);
         var captured = sampler.CaptureState();
         _state = _state with { SnrScale = snrScale, Updates = _state.Updates + 1, Sampler = captured };
+        Lap(BandUpdatePhase.StateCapture);
+        var template = Template(generator);
+        Lap(BandUpdatePhase.OutputTemplate);
         clock.Stop();
         var statistics = new GalacticBinaryBandStatistics(steps, sampler.Step, sampler.SourceCount(0), sampler.LogLikelihood(0),
-            clock.Elapsed, sampler.GetStatistics());
-        return new GalacticBinaryBandUpdate(Window.Index, Template(generator), collector.Samples.ToImmutable(), statistics);
+            clock.Elapsed, sampler.GetStatistics()) { Phases = phases.Snapshot() };
+        return new GalacticBinaryBandUpdate(Window.Index, template, collector.Samples.ToImmutable(), statistics);
     }
 
     /// <summary>The sources of the first cold chain now.</summary>
@@ -326,14 +351,16 @@ public sealed class GalacticBinaryBandWorker
         return result.MoveToImmutable();
     }
 
-    private sealed class SampleCollector(int interval, double snrScale) : ITransdimensionalSampleSink
+    private sealed class SampleCollector(int interval, double snrScale, BandUpdateClock clock) : ITransdimensionalSampleSink
     {
         public ImmutableArray<GalacticBinarySample>.Builder Samples { get; } = ImmutableArray.CreateBuilder<GalacticBinarySample>();
 
         public void OnSample(long step, int replica, int sourceCount, ReadOnlySpan<double> sources, double logLikelihood, double logPrior)
         {
             if (replica != 0 || step % interval != 0) return;
+            long started = BandUpdateClock.Now();
             Samples.Add(new GalacticBinarySample(step, ToParameters(sources, sourceCount, snrScale), logLikelihood));
+            clock.Add(BandUpdatePhase.SampleCollection, started);
         }
     }
 }

@@ -48,8 +48,28 @@ public sealed class GalacticBinaryBirthDensity : IBirthDensity
         _snrScale = snrScale;
     }
 
+    /// <summary>Where the density's F-statistic evaluations are timed.</summary>
+    internal BandUpdateClock Clock { get; set; } = new();
+
     /// <inheritdoc />
     public double Draw(Span<double> source, ref RandomStream random)
+    {
+        long started = BandUpdateClock.Now();
+        double logDensity = DrawUntimed(source, ref random);
+        Clock.Add(BandUpdatePhase.BirthDensity, started);
+        return logDensity;
+    }
+
+    /// <inheritdoc />
+    public double LogDensity(ReadOnlySpan<double> source)
+    {
+        long started = BandUpdateClock.Now();
+        double logDensity = LogDensityUntimed(source);
+        Clock.Add(BandUpdatePhase.BirthDensity, started);
+        return logDensity;
+    }
+
+    private double DrawUntimed(Span<double> source, ref RandomStream random)
     {
         var point = _map.Draw(random.NextDouble(), random.NextDouble(), random.NextDouble(), random.NextDouble(), random.NextDouble());
         var result = _statistic.Evaluate(point, _band);
@@ -80,8 +100,7 @@ public sealed class GalacticBinaryBirthDensity : IBirthDensity
         return _map.LogDensity(point) + LogGaussian(result, quadratic) + LogJacobian(extrinsics.Amplitude, extrinsics.CosInclination);
     }
 
-    /// <inheritdoc />
-    public double LogDensity(ReadOnlySpan<double> source)
+    private double LogDensityUntimed(ReadOnlySpan<double> source)
     {
         var parameters = ToParameters(source, _snrScale);
         var point = GalacticBinaryIntrinsics.Of(parameters);

@@ -86,6 +86,6 @@ internal sealed class GalacticBinaryFitWorker : IFitWorker
             accepted += p.Accepted;
         }
         return new WorkerStatistics(statistics.StepsThisUpdate, statistics.TotalSteps, statistics.SourceCount, statistics.LogLikelihood,
-            proposed == 0 ? 0.0 : (double)accepted / proposed, statistics.WallTime);
+            proposed == 0 ? 0.0 : (double)accepted / proposed, statistics.WallTime) { Phases = statistics.Phases };
     }
 }

@@ -46,8 +46,18 @@ public sealed class GalacticBinarySourceFisher : IFisherInformation
     /// <inheritdoc />
     public int Dimension => GalacticBinarySourceVector.Dimension;
 
+    /// <summary>Where the Fisher matrices are timed.</summary>
+    internal BandUpdateClock Clock { get; set; } = new();
+
     /// <inheritdoc />
     public void FisherMatrix(ReadOnlySpan<double> theta, Span<double> matrix)
+    {
+        long started = BandUpdateClock.Now();
+        Compute(theta, matrix);
+        Clock.Add(BandUpdatePhase.Fisher, started);
+    }
+
+    private void Compute(ReadOnlySpan<double> theta, Span<double> matrix)
     {
         int d = Dimension, channels = _band.IncludesT ? 3 : 2;
         for (int i = 0; i < d; i++)

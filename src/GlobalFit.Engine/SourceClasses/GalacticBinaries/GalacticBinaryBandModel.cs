@@ -23,7 +23,7 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
     private readonly GalacticBinaryTemplateGenerator _generator;
     private readonly GalacticBinarySourcePrior _prior;
     private readonly GalacticBinaryBand _band;
-    private readonly Dictionary<SourceKey, CachedTemplate> _cache = [];
+    private readonly Dictionary<GalacticBinarySourceKey, CachedTemplate> _cache = [];
     private readonly Stack<CachedTemplate> _pool = new();
     private readonly int _cacheCapacity;
     private readonly CachedTemplate[] _current;
@@ -146,7 +146,7 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
 
     private CachedTemplate Template(ReadOnlySpan<double> values)
     {
-        var key = new SourceKey(values);
+        var key = new GalacticBinarySourceKey(values);
         if (_cache.TryGetValue(key, out var cached)) return cached;
         long started = BandUpdateClock.Now();
         // A cached template holds only its overlap with the band, so the band's width bounds it (a year-long template
@@ -231,12 +231,5 @@ public sealed class GalacticBinaryBandModel : ITransdimensionalModel
         public int Count { get; set; }
         public double DataOverlap { get; set; }
         public double SquaredNorm { get; set; }
-    }
-
-    private readonly record struct SourceKey(double F0, double FDot, double Snr, double SinBeta, double Lambda, double CosIota, double Psi, double Phi0)
-    {
-        public SourceKey(ReadOnlySpan<double> v) : this(v[0], v[1], v[2], v[3], v[4], v[5], v[6], v[7])
-        {
-        }
     }
 }

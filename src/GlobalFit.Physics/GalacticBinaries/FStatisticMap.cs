@@ -33,6 +33,19 @@ public sealed class FStatisticMap
         return new FStatisticMap(grid, ImmutableArray.Create(values));
     }
 
+    /// <summary>A map of values computed elsewhere (e.g. updated cell by cell where the data changed).</summary>
+    /// <param name="grid">The grid.</param>
+    /// <param name="values">F at each cell centre, by cell index.</param>
+    /// <returns>The map.</returns>
+    /// <exception cref="ArgumentException">The number of values differs from the grid's cell count.</exception>
+    public static FStatisticMap FromValues(FStatisticGrid grid, ImmutableArray<double> values)
+    {
+        ArgumentNullException.ThrowIfNull(grid);
+        if (values.IsDefault || values.Length != grid.CellCount)
+            throw new ArgumentException($"need {grid.CellCount} values, one per cell, got {(values.IsDefault ? 0 : values.Length)}", nameof(values));
+        return new FStatisticMap(grid, values);
+    }
+
     /// <summary>The cell with the largest F.</summary>
     public int BestCell()
     {

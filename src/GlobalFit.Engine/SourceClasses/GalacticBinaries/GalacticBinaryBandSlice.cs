@@ -144,6 +144,18 @@ public sealed class GalacticBinaryBandSlice
             _workers.Sum(w => w.CurrentSources().Length));
     }
 
+    /// <summary>A copy of window <paramref name="index"/>'s worker as it stands (restored from its saved state), for timing
+    /// one update again and again from the same start.</summary>
+    /// <param name="index">Window index.</param>
+    /// <returns>The copy.</returns>
+    public GalacticBinaryBandWorker CopyOfWorker(int index) =>
+        GalacticBinaryBandWorker.Restore(Settings, Plan.Windows[index], _tools, _workers[index].SaveState());
+
+    /// <summary>Window <paramref name="index"/>'s residual now: the data minus the other windows' current templates.</summary>
+    /// <param name="index">Window index.</param>
+    /// <returns>A fresh copy.</returns>
+    public GalacticBinaryBand ResidualOf(int index) => Residual(Plan.Windows[index]);
+
     /// <summary>SHA-256 of every worker's saved state in window order, hex: equal digests mean bit-identical fits.</summary>
     /// <returns>64 hex digits.</returns>
     public string StateDigest()

@@ -161,7 +161,7 @@ public sealed class GalacticBinaryBandWorker
         var map = new FStatisticCellDensity(FStatisticMap.Compute(statistic, residual, grid), MapUniformFraction);
         Lap(BandUpdatePhase.FStatisticMap);
         var birth = new GalacticBinaryBirthDensity(statistic, residual, map, snrScale) { Clock = phases };
-        var fisher = new GalacticBinarySourceFisher(generator, residual, snrScale, _prior.Schema, 2 * chains * _settings.MaxSourcesPerWindow + 64) { Clock = phases };
+        var fisher = new GalacticBinarySourceFisher(generator, residual, snrScale, _prior.Schema, 8 * chains * _settings.MaxSourcesPerWindow + 256) { Clock = phases };
         var samplerSettings = SamplerSettings(fisher, birth);
         Lap(BandUpdatePhase.ProposalSetup);
         var start = _state.Sampler;

@@ -31,7 +31,7 @@ public sealed class FStatistic
     /// <summary>The template generator.</summary>
     public GalacticBinaryTemplateGenerator Generator { get; }
 
-    /// <summary>The basis responses of the last <see cref="Evaluate"/> call.</summary>
+    /// <summary>The basis responses of the last <see cref="Evaluate"/> call (channel T only if that band had T).</summary>
     public GalacticBinaryBasis LastBasis => _basis;
 
     /// <summary>F and the maximum-likelihood amplitudes at <paramref name="point"/> for the data of <paramref name="band"/>.</summary>
@@ -39,7 +39,8 @@ public sealed class FStatistic
     public FStatisticResult Evaluate(in GalacticBinaryIntrinsics point, GalacticBinaryBand band)
     {
         ArgumentNullException.ThrowIfNull(band);
-        Generator.FillBasis(point.FrequencyHz, point.FrequencyDerivativeHzS, point.EclipticLatitudeRad, point.EclipticLongitudeRad, _basis);
+        Generator.FillBasis(point.FrequencyHz, point.FrequencyDerivativeHzS, point.EclipticLatitudeRad, point.EclipticLongitudeRad, _basis,
+            includeT: band.IncludesT);
         var sums = new Sums();
         Accumulate(ref sums, band, band.DataA, band.InverseA, _basis.PlusA, _basis.CrossA);
         Accumulate(ref sums, band, band.DataE, band.InverseE, _basis.PlusE, _basis.CrossE);

@@ -219,12 +219,14 @@ public sealed class GalacticBinaryTemplateGenerator
     /// <param name="eclipticLongitudeRad">λ.</param>
     /// <param name="basis">Caller-owned buffers of capacity at least <see cref="MaximumEnvelopeLength"/>.</param>
     /// <param name="secondFrequencyDerivativeHzS2">f̈, default 0.</param>
+    /// <param name="includeT">False to leave the T buffers unfilled (two of the six transforms; A and E are the same
+    /// numbers either way).</param>
     /// <remarks>Bins are not folded at DC (the folding is not linear in the complex amplitudes); the F-statistic of a
     /// source within N/2 bins of DC is therefore approximate.</remarks>
     /// <exception cref="ArgumentException">The basis is too small.</exception>
     /// <exception cref="ArgumentOutOfRangeException">f0 is not in (0, Nyquist).</exception>
     public void FillBasis(double frequencyHz, double frequencyDerivativeHzS, double eclipticLatitudeRad, double eclipticLongitudeRad,
-        GalacticBinaryBasis basis, double secondFrequencyDerivativeHzS2 = 0.0)
+        GalacticBinaryBasis basis, double secondFrequencyDerivativeHzS2 = 0.0, bool includeT = true)
     {
         ArgumentNullException.ThrowIfNull(basis);
         if (basis.PlusA.Length < MaximumEnvelopeLength)
@@ -237,10 +239,10 @@ public sealed class GalacticBinaryTemplateGenerator
             basis.CrossA.AsSpan(0, length), basis.CrossE.AsSpan(0, length), basis.CrossT.AsSpan(0, length));
         ToBins(basis.PlusA.AsSpan(0, length), _closingPlus.A);
         ToBins(basis.PlusE.AsSpan(0, length), _closingPlus.E);
-        ToBins(basis.PlusT.AsSpan(0, length), _closingPlus.T);
+        if (includeT) ToBins(basis.PlusT.AsSpan(0, length), _closingPlus.T);
         ToBins(basis.CrossA.AsSpan(0, length), _closingCross.A);
         ToBins(basis.CrossE.AsSpan(0, length), _closingCross.E);
-        ToBins(basis.CrossT.AsSpan(0, length), _closingCross.T);
+        if (includeT) ToBins(basis.CrossT.AsSpan(0, length), _closingCross.T);
         basis.FirstBin = q - length / 2;
         basis.Count = length;
     }

@@ -22,7 +22,8 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// birth and death (probability <c>jump_probability</c>), split and merge of nearby sources (<see cref="GalacticBinarySplitMerge"/>,
 /// probability <c>split_merge_probability</c>), otherwise one source moved by a Gaussian from that source's own Fisher matrix
 /// (<see cref="LocalFisherGaussianProposal"/>, weight 0.4), Fisher-eigen jumps of the Inference library (0.15),
-/// differential evolution (0.15), adaptive Gaussian (0.1), the antipodal sky reflection (0.1) or a fresh draw of the
+/// differential evolution (0.15), adaptive Gaussian (0.1), a Doppler-compensated sky jump with fresh amplitudes
+/// (<see cref="DopplerSkyJumpProposal"/>, 0.15) or a fresh draw of the
 /// birth density (<see cref="BirthDensityJumpProposal"/>, 0.1). The prior is
 /// <see cref="GalacticBinarySourcePrior"/> with a uniform count prior on 0 … <c>max_sources_per_window</c>.</para>
 /// <para>A new worker's chains start from the sources of <see cref="GreedyFStatisticSearch"/> on its first residual
@@ -151,7 +152,9 @@ public sealed class GalacticBinaryBandWorker
         var map = new FStatisticCellDensity(FStatisticMap.Compute(statistic, residual, grid), MapUniformFraction);
         var birth = new GalacticBinaryBirthDensity(statistic, residual, map, snrScale);
         var fisher = new GalacticBinarySourceFisher(generator, residual, snrScale, _prior.Schema);
-        var samplerSettings = SamplerSettings(fisher, birth);
+        var samplerSettings = SamplerSettings(fisher, birth, DopplerSkyJumpProposal.Spec(0.15, birth,
+            DopplerSkyJumpProposal.Geometry(generator.Orbits, generator.StartSeconds, generator.DurationSeconds), snrScale,
+            Window.SourceStartHz, Window.SourceEndHz));
         var start = _state.Sampler ?? Seeded(new ReversibleJumpSampler<GalacticBinaryBandModel>(model, birth, samplerSettings).CaptureState(),
             GreedyFStatisticSearch.Run(statistic, residual, grid, _settings.MaxSourcesPerWindow), snrScale);
         var sampler = ReversibleJumpSampler<GalacticBinaryBandModel>.Resume(model, birth, samplerSettings, Rescored(start, model));
@@ -252,7 +255,7 @@ public sealed class GalacticBinaryBandWorker
         return adopted;
     }
 
-    private ReversibleJumpSettings SamplerSettings(GalacticBinarySourceFisher fisher, GalacticBinaryBirthDensity birth) => new()
+    private ReversibleJumpSettings SamplerSettings(GalacticBinarySourceFisher fisher, GalacticBinaryBirthDensity birth, ProposalSpec skyJump) => new()
     {
         Tempering = new TemperingSettings
         {
@@ -266,7 +269,7 @@ public sealed class GalacticBinaryBandWorker
             ProposalSpec.FisherEigen(0.15, fisher, _settings.FisherRefreshSteps),
             ProposalSpec.DifferentialEvolution(0.15),
             ProposalSpec.AdaptiveGaussian(0.1),
-            AntipodalSkyProposal.Spec(0.1),
+            skyJump,
             BirthDensityJumpProposal.Spec(0.1, birth),
         ],
         MaxSources = _settings.MaxSourcesPerWindow,

@@ -15,9 +15,11 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// (f0, sky), and at each sky point on it ι, ψ and φ0 take other values. A move of the sky alone (the
 /// antipodal or mirror move of β and λ only) leaves f0 and the amplitudes behind and is refused; a Gaussian step is too short
 /// to travel the ridge. This move carries all three along.</para>
-/// <para>Sky kernel (probabilities fixed, independent of the point, so each choice is its own reverse): reflection through
-/// the constellation plane at mid-record (the direction and its mirror image give the same long-wavelength response)
-/// 0.25; antipode 0.15; reflection in the ecliptic 0.15; a uniform draw on the sphere 0.2; a Gaussian step of
+/// <para>Sky kernel (probabilities fixed, independent of the point, so each choice is its own reverse): the same sky
+/// (a pure refresh of the amplitudes from their conditional, which mixes the ρ̂–cos ι and ψ–φ0 degeneracies that
+/// Gaussian steps cross slowly) 0.3; reflection through the constellation plane at mid-record (the direction and its
+/// mirror image give the same long-wavelength response) 0.15; antipode 0.1; reflection in the ecliptic 0.1; a uniform
+/// draw on the sphere 0.15; a Gaussian step of
 /// σ = (0.15, 0.3 rad) in (sin β, λ), folded at sin β = ±1 and wrapped in λ, 0.25. Each is symmetric in the
 /// sphere's area measure d(sin β) dλ. f0 then becomes <c>f0′ = f0 (1 + k)/(1 + k′)</c>, with k = n̂·v̄/c for the
 /// mean velocity v̄ of the constellation's centre over the record and n̂ the direction to the source, which keeps
@@ -31,10 +33,11 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// </remarks>
 public sealed class DopplerSkyJumpProposal : IProposal
 {
-    private const double DetectorPlaneProbability = 0.25;
-    private const double AntipodeProbability = 0.15;
-    private const double EclipticProbability = 0.15;
-    private const double UniformProbability = 0.2;
+    private const double StayProbability = 0.3;
+    private const double DetectorPlaneProbability = 0.15;
+    private const double AntipodeProbability = 0.1;
+    private const double EclipticProbability = 0.1;
+    private const double UniformProbability = 0.15;
     private const double LatitudeStep = 0.15;
     private const double LongitudeStep = 0.3;
 
@@ -125,6 +128,8 @@ public sealed class DopplerSkyJumpProposal : IProposal
     private (double SinLatitude, double Longitude) NewSky(double sinLatitude, double longitude, ref RandomStream random)
     {
         double choice = random.NextDouble();
+        if (choice < StayProbability) return (sinLatitude, longitude);
+        choice -= StayProbability;
         if (choice < DetectorPlaneProbability)
         {
             double cosLatitude = Math.Sqrt(Math.Max(0.0, 1.0 - sinLatitude * sinLatitude));

@@ -21,9 +21,9 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// against the new residual, and continues the sampler from its saved state for the requested number of steps. Moves:
 /// birth and death (probability <c>jump_probability</c>), split and merge of nearby sources (<see cref="GalacticBinarySplitMerge"/>,
 /// probability <c>split_merge_probability</c>), otherwise one source moved by a Gaussian from that source's own Fisher matrix
-/// (<see cref="LocalFisherGaussianProposal"/>, weight 0.4), Fisher-eigen jumps of the Inference library (0.15),
-/// differential evolution (0.15), adaptive Gaussian (0.1), a Doppler-compensated sky jump with fresh amplitudes
-/// (<see cref="DopplerSkyJumpProposal"/>, 0.15) or a fresh draw of the
+/// (<see cref="LocalFisherGaussianProposal"/>, weight 0.3), Fisher-eigen jumps of the Inference library (0.1),
+/// differential evolution (0.1), adaptive Gaussian (0.05), a Doppler-compensated sky jump with fresh amplitudes
+/// (<see cref="DopplerSkyJumpProposal"/>, 0.3) or a fresh draw of the
 /// birth density (<see cref="BirthDensityJumpProposal"/>, 0.1). The prior is
 /// <see cref="GalacticBinarySourcePrior"/> with a uniform count prior on 0 … <c>max_sources_per_window</c>.</para>
 /// <para>A new worker's chains start from the sources of <see cref="GreedyFStatisticSearch"/> on its first residual
@@ -44,6 +44,8 @@ public sealed class GalacticBinaryBandWorker
     private readonly GalacticBinaryToolPool _tools;
     private readonly GalacticBinarySourcePrior _prior;
     private GalacticBinaryBandWorkerState _state;
+    private GalacticBinarySourcePrior? _galaxyPrior;
+    private double _galaxyPriorScale;
 
     /// <summary>Creates a worker with no sources yet.</summary>
     /// <param name="settings">The galactic-binary settings.</param>
@@ -142,7 +144,7 @@ public sealed class GalacticBinaryBandWorker
             ? _state.SnrScale
             : GalacticBinaryBandModel.AverageSnrPerUnitAmplitude(generator, residual, 0.5 * (Window.CoreStartHz + Window.CoreEndHz));
         int chains = _settings.TemperatureCount * _settings.ChainsPerTemperature;
-        var model = new GalacticBinaryBandModel(generator, _prior, residual, snrScale, _settings.MaxSourcesPerWindow,
+        var model = new GalacticBinaryBandModel(generator, Prior(snrScale), residual, snrScale, _settings.MaxSourcesPerWindow,
             4 * chains * _settings.MaxSourcesPerWindow + 256);
         // Births and the starting search cover the core only: a source enters a drift margin only by moving there, and is
         // handed to the neighbour that owns it; were births allowed in the margins, two windows would fit the same signal.
@@ -152,7 +154,7 @@ public sealed class GalacticBinaryBandWorker
         var map = new FStatisticCellDensity(FStatisticMap.Compute(statistic, residual, grid), MapUniformFraction);
         var birth = new GalacticBinaryBirthDensity(statistic, residual, map, snrScale);
         var fisher = new GalacticBinarySourceFisher(generator, residual, snrScale, _prior.Schema);
-        var samplerSettings = SamplerSettings(fisher, birth, DopplerSkyJumpProposal.Spec(0.15, birth,
+        var samplerSettings = SamplerSettings(fisher, birth, DopplerSkyJumpProposal.Spec(0.3, birth,
             DopplerSkyJumpProposal.Geometry(generator.Orbits, generator.StartSeconds, generator.DurationSeconds), snrScale,
             Window.SourceStartHz, Window.SourceEndHz));
         var start = _state.Sampler ?? Seeded(new ReversibleJumpSampler<GalacticBinaryBandModel>(model, birth, samplerSettings).CaptureState(),
@@ -166,6 +168,19 @@ public sealed class GalacticBinaryBandWorker
         var statistics = new GalacticBinaryBandStatistics(steps, sampler.Step, sampler.SourceCount(0), sampler.LogLikelihood(0),
             clock.Elapsed, sampler.GetStatistics());
         return new GalacticBinaryBandUpdate(Window.Index, Template(generator), collector.Samples.ToImmutable(), statistics);
+    }
+
+    // The galaxy sky needs the SNR scale, known from the first update on; it is rebuilt (deterministically) once per worker.
+    private GalacticBinarySourcePrior Prior(double snrScale)
+    {
+        if (_settings.SkyPrior != GalacticBinaryBandSettings.GalaxySky) return _prior;
+        if (_galaxyPrior is null || _galaxyPriorScale != snrScale)
+        {
+            var sky = new GalacticSkyDensity(GalacticPopulationSettings.Defaults, 0.5 * (Window.CoreStartHz + Window.CoreEndHz), snrScale,
+                Math.Max(_settings.CatalogueMinSnr, 1.0));
+            (_galaxyPrior, _galaxyPriorScale) = (_prior.WithSky(sky), snrScale);
+        }
+        return _galaxyPrior;
     }
 
     /// <summary>The sources of the first cold chain now.</summary>
@@ -265,10 +280,10 @@ public sealed class GalacticBinaryBandWorker
         },
         WithinProposals =
         [
-            LocalFisherGaussianProposal.Spec(0.4, fisher),
-            ProposalSpec.FisherEigen(0.15, fisher, _settings.FisherRefreshSteps),
-            ProposalSpec.DifferentialEvolution(0.15),
-            ProposalSpec.AdaptiveGaussian(0.1),
+            LocalFisherGaussianProposal.Spec(0.3, fisher),
+            ProposalSpec.FisherEigen(0.1, fisher, _settings.FisherRefreshSteps),
+            ProposalSpec.DifferentialEvolution(0.1),
+            ProposalSpec.AdaptiveGaussian(0.05),
             skyJump,
             BirthDensityJumpProposal.Spec(0.1, birth),
         ],

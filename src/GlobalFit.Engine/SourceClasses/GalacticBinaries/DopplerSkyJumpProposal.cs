@@ -17,10 +17,11 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// to travel the ridge. This move carries all three along.</para>
 /// <para>Sky kernel (probabilities fixed, independent of the point, so each choice is its own reverse): the same sky
 /// (a pure refresh of the amplitudes from their conditional, which mixes the ρ̂–cos ι and ψ–φ0 degeneracies that
-/// Gaussian steps cross slowly) 0.3; reflection through the constellation plane at mid-record (the direction and its
-/// mirror image give the same long-wavelength response) 0.15; antipode 0.1; reflection in the ecliptic 0.1; a uniform
-/// draw on the sphere 0.15; a Gaussian step of
-/// σ = (0.15, 0.3 rad) in (sin β, λ), folded at sin β = ±1 and wrapped in λ, 0.25. Each is symmetric in the
+/// Gaussian steps cross slowly) 0.25; reflection through the constellation plane at mid-record (the direction and its
+/// mirror image give the same long-wavelength response) 0.1; antipode 0.05; reflection in the ecliptic 0.1; a uniform
+/// draw on the sphere 0.05; a Gaussian step of σ = (0.1, 0.2 rad) in (sin β, λ), folded at sin β = ±1 and wrapped in λ,
+/// 0.45 (the walk along the ridge: on the demo, with 0.2 of it and steps of (0.15, 0.3), f0 and sky kept a bulk ESS of
+/// ~15 in 1440 samples). Each is symmetric in the
 /// sphere's area measure d(sin β) dλ. f0 then becomes <c>f0′ = f0 (1 + k)/(1 + k′)</c>, with k = n̂·v̄/c for the
 /// mean velocity v̄ of the constellation's centre over the record and n̂ the direction to the source, which keeps
 /// f0(1 + k) fixed; its Jacobian is (1 + k)/(1 + k′). Last, (ρ̂, cos ι, ψ, φ0) are drawn by
@@ -33,13 +34,13 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// </remarks>
 public sealed class DopplerSkyJumpProposal : IProposal
 {
-    private const double StayProbability = 0.3;
-    private const double DetectorPlaneProbability = 0.15;
-    private const double AntipodeProbability = 0.1;
+    private const double StayProbability = 0.25;
+    private const double DetectorPlaneProbability = 0.1;
+    private const double AntipodeProbability = 0.05;
     private const double EclipticProbability = 0.1;
-    private const double UniformProbability = 0.15;
-    private const double LatitudeStep = 0.15;
-    private const double LongitudeStep = 0.3;
+    private const double UniformProbability = 0.05;
+    private const double LatitudeStep = 0.1;
+    private const double LongitudeStep = 0.2;
 
     private readonly GalacticBinaryBirthDensity _extrinsics;
     private readonly ChainTemperature _temperature;

@@ -23,7 +23,7 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// probability <c>split_merge_probability</c>), otherwise one source moved by a Gaussian from that source's own Fisher matrix
 /// (<see cref="LocalFisherGaussianProposal"/>, weight 0.3), Fisher-eigen jumps of the Inference library (0.1),
 /// differential evolution (0.1), adaptive Gaussian (0.05), a Doppler-compensated sky jump with fresh amplitudes
-/// (<see cref="DopplerSkyJumpProposal"/>, 0.3) or a fresh draw of the
+/// (<see cref="DopplerSkyJumpProposal"/>, 0.5) or a fresh draw of the
 /// birth density (<see cref="BirthDensityJumpProposal"/>, 0.1). The prior is
 /// <see cref="GalacticBinarySourcePrior"/> with a uniform count prior on 0 … <c>max_sources_per_window</c>.</para>
 /// <para>A new worker's chains start from the sources of <see cref="GreedyFStatisticSearch"/> on its first residual
@@ -154,7 +154,7 @@ public sealed class GalacticBinaryBandWorker
         var map = new FStatisticCellDensity(FStatisticMap.Compute(statistic, residual, grid), MapUniformFraction);
         var birth = new GalacticBinaryBirthDensity(statistic, residual, map, snrScale);
         var fisher = new GalacticBinarySourceFisher(generator, residual, snrScale, _prior.Schema);
-        var samplerSettings = SamplerSettings(fisher, birth, DopplerSkyJumpProposal.Spec(0.3, birth,
+        var samplerSettings = SamplerSettings(fisher, birth, DopplerSkyJumpProposal.Spec(0.5, birth,
             DopplerSkyJumpProposal.Geometry(generator.Orbits, generator.StartSeconds, generator.DurationSeconds), snrScale,
             Window.SourceStartHz, Window.SourceEndHz));
         var start = _state.Sampler ?? Seeded(new ReversibleJumpSampler<GalacticBinaryBandModel>(model, birth, samplerSettings).CaptureState(),

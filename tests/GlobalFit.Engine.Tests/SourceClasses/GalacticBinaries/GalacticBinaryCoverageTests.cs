@@ -12,17 +12,19 @@ public sealed class GalacticBinaryCoverageTests(ITestOutputHelper output)
 {
     private const double Days = 30;
 
-    // 20 binaries of SNR 8–25 (log-uniform) in 4 windows of 128 bins from 3 mHz, one every ~25 bins, so neighbouring
-    // templates (~30 bins wide over a month) overlap: crowded like the demo's band. Sky positions from the built-in Galaxy
-    // model, cos ι, ψ, φ0 uniform, ḟ uniform in the prior (a month cannot measure it). Each parameter's 90 % interval must
+    // 20 binaries with reference SNR ρ̂ ≥ 7 from the fit's amplitude prior in 4 windows of 128 bins from 3 mHz, one every ~25 bins, so neighbouring
+    // templates (~30 bins wide over a month) overlap: crowded like the demo's band. Sky positions from the fit's galaxy sky prior
+    // (a coverage test must draw its truths from the prior it fits with), cos ι, ψ, φ0 uniform, ḟ uniform in the prior (a month cannot measure it). Each parameter's 90 % interval must
     // cover at least 14 of the found truths (70 %: the 3σ binomial band below 0.9 for n = 20, 0.9 − 3·0.067). False-failure
     // rate for a calibrated posterior: P(Binomial(20, 0.9) ≤ 13) = 0.24 % per parameter, ≤ 2 % over the eight (union
     // bound); the seeds are fixed, so the outcome is deterministic for a given code. Also asserted: at least 18 of the
     // 20 found (confident entry with median overlap ≥ 0.5).
-    // Not met yet, so skipped rather than left failing: measured 20/20 found in 26 s, coverage f0 12/20, fdot 18/20,
-    // amplitude 11/20, beta 12/20, lambda 13/20, iota 7/20, psi 16/20, phi0 17/20 (10 rounds of 600 steps, 6 recorded):
-    // the chains do not converge in this budget (the demo's split R-hat reaches 1.9 with 900 steps per update).
-    [Fact(Skip = "not met yet: coverage 7-18 of 20 per parameter (see comment)")]
+    // Not met yet, so skipped rather than left failing. Measured (this set-up: truths from the fit's own priors, 8 rungs up
+    // to temperature 10, 10 rounds of 600 steps, 6 recorded, ~35 s): 19/20 found, coverage f0 10/19, fdot 14/19,
+    // amplitude 17/19, beta 15/19, lambda 13/19, iota 15/19, psi 15/19, phi0 18/19. Earlier variants: truths' sky from the
+    // whole population and SNR log-uniform 8–25, 4 rungs up to 50: f0 12/20, amplitude 11/20, iota 7/20; the same with 8
+    // rungs up to 10: f0 10/20, amplitude 17/20, iota 12/20. f0 is the parameter that stays under-covered.
+    [Fact(Skip = "not met yet: f0 covers 10 of 19 (see comment)")]
     public void Ninety_percent_intervals_cover_crowded_one_month_injections()
     {
         var settings = GalacticBinaryBandWorkerTests.SmallSettings with
@@ -31,21 +33,39 @@ public sealed class GalacticBinaryCoverageTests(ITestOutputHelper output)
             MaxSourcesPerWindow = 10,
             SkyPrior = GalacticBinaryBandSettings.GalaxySky,
             SampleInterval = 10,
+            TemperatureCount = 8,
+            MaxTemperature = 10,
         };
         var plan = GalacticBinaryBandPlan.Create(settings, new GalacticBinaryTemplateGenerator(Days * 86400.0, BandTestData.CadenceSeconds));
         var bins = BandFitDriver.DataBins(plan);
         var probe = new BandTestData(Days, bins, [], 1, noise: false);
         double df = probe.DfHz;
         var random = RandomStream.FromSeed(2026);
-        var sky = GalacticPopulation.Draw(GalacticPopulationSettings.Defaults with { Count = 20 }, ref random);
+        // Sky positions from the prior the fit uses (the galaxy density of the first window; the windows' densities differ
+        // only through their SNR scales, a few per cent apart), by rejection from the isotropic sky.
+        var window0 = plan.Windows[0];
+        double scale = GalacticBinaryBandModel.AverageSnrPerUnitAmplitude(probe.Generator, probe.Residual(window0.Padded),
+            0.5 * (window0.CoreStartHz + window0.CoreEndHz));
+        var density = new GalacticSkyDensity(GalacticPopulationSettings.Defaults, 0.5 * (window0.CoreStartHz + window0.CoreEndHz), scale, settings.CatalogueMinSnr);
+        var amplitudePrior = new SnrAmplitudePrior(settings.SnrPriorPeak, settings.SnrMax);
+        var sky = new (double BetaRad, double LambdaRad)[20];
+        for (int i = 0; i < sky.Length; i++)
+        {
+            double sinBeta, lambda;
+            do (sinBeta, lambda) = (random.NextUniform(-1, 1), random.NextUniform(0, 2 * Math.PI));
+            while (Math.Log(random.NextDoubleNonZero()) > density.LogDensity(sinBeta, lambda) - density.MaxLogDensity);
+            sky[i] = (Math.Asin(sinBeta), lambda);
+        }
         var injected = new List<GalacticBinaryParameters>();
         for (int i = 0; i < 20; i++)
         {
             double f0 = plan.Windows[0].CoreStartHz + (8 + 25 * i + random.NextUniform(0, 10)) * df;
-            double snr = 8 * Math.Pow(25.0 / 8, random.NextDouble());
-            var shape = new GalacticBinaryParameters(f0, random.NextUniform(-1e-16, 1e-15), 1e-22, sky[i].BetaRad, sky[i].LambdaRad,
-                Math.Acos(random.NextUniform(-1, 1)), random.NextUniform(0, Math.PI), random.NextUniform(0, 2 * Math.PI));
-            injected.Add(probe.WithSnr(shape, snr));
+            // ρ̂ from the fit's own amplitude prior, kept from 7 up (the catalogue's reach); A = ρ̂/s.
+            double snrHat;
+            do snrHat = amplitudePrior.Quantile(random.NextDouble());
+            while (snrHat < 7);
+            injected.Add(new GalacticBinaryParameters(f0, random.NextUniform(-1e-16, 1e-15), snrHat / scale, sky[i].BetaRad, sky[i].LambdaRad,
+                Math.Acos(random.NextUniform(-1, 1)), random.NextUniform(0, Math.PI), random.NextUniform(0, 2 * Math.PI)));
         }
         var data = new BandTestData(Days, bins, injected, 23);
         var driver = new BandFitDriver(settings, data, Days, 5);

@@ -25,11 +25,13 @@ internal static class ComparisonReport
             o.WriteLine("    " + string.Join("  ", r.Coverage.Select(c => c.Count == 0 ? $"{c.Parameter} -" : I($"{c.Parameter} {c.Fraction:F2}±{c.StandardError:F2}"))));
             if (r.Found.Length > 0)
             {
-                o.WriteLine("  found (median - truth in posterior sigma):");
-                o.WriteLine("    truth          source     SNR inj  SNR fit  conf  overlap  " + string.Join(" ", r.ParameterColumns.Select(c => Short(c).PadLeft(7))));
+                bool convergence = r.Found.Any(f => f.Convergence is not null);
+                o.WriteLine("  found (median - truth in posterior sigma" + (convergence ? "; largest split R-hat, smallest bulk ESS and the sky mode holding most samples, with its fraction" : "") + "):");
+                o.WriteLine("    truth          source     SNR inj  SNR fit  conf  overlap  " + string.Join(" ", r.ParameterColumns.Select(c => Short(c).PadLeft(7)))
+                    + (convergence ? "   R-hat     ESS  sky mode" : ""));
                 foreach (var f in r.Found)
                     o.WriteLine(I($"    {f.TruthId,-14} {f.SourceId,-10} {f.InjectedSnr,7:F1}  {f.SourceSnr,7:F1}  {f.Confidence,4:F2}  {f.Overlap,7:F2}  ")
-                        + string.Join(" ", f.ErrorsInSigma.Select(e => SigmaText(e).PadLeft(7))));
+                        + string.Join(" ", f.ErrorsInSigma.Select(e => SigmaText(e).PadLeft(7))) + ConvergenceText(f.Convergence));
             }
             foreach (var m in r.Missed)
                 o.WriteLine(I($"  missed {m.TruthId}, SNR {m.InjectedSnr:F1}: ") + Parameters(r.ParameterColumns, m.Parameters));
@@ -62,12 +64,18 @@ internal static class ComparisonReport
             {
                 ["parameter"] = c.Parameter, ["inside"] = c.Inside, ["count"] = c.Count, ["fraction"] = c.Fraction, ["standard_error"] = c.StandardError,
             }).ToList(),
-            ["found"] = r.Found.Select(f => new Dictionary<string, object>
+            ["found"] = r.Found.Select(f => new Dictionary<string, object?>
             {
                 ["truth_id"] = f.TruthId, ["source_id"] = f.SourceId, ["injected_snr"] = f.InjectedSnr, ["source_snr"] = f.SourceSnr,
                 ["confidence"] = f.Confidence, ["overlap"] = f.Overlap,
                 ["errors_in_sigma"] = r.ParameterColumns.Select((c, i) => (c, i)).ToDictionary(x => x.c, x => f.ErrorsInSigma[x.i]),
                 ["inside_interval"] = r.ParameterColumns.Select((c, i) => (c, i)).ToDictionary(x => x.c, x => f.InsideInterval[x.i]),
+                ["convergence"] = f.Convergence is not { } report ? null : new Dictionary<string, object>
+                {
+                    ["max_split_rhat"] = report.MaxSplitRhat,
+                    ["min_ess"] = report.MinEffectiveSampleSize,
+                    ["sky_modes"] = report.ModeNames.Select((m, i) => (m, i)).ToDictionary(x => x.m, x => (object)report.ModeFractions[x.i]),
+                },
             }).ToList(),
             ["missed"] = r.Missed.Select(m => new Dictionary<string, object>
             {
@@ -81,6 +89,15 @@ internal static class ComparisonReport
             }).ToList(),
         }).ToList(),
     };
+
+    // "   1.003    412  north_above 0.97": the worst R̂ and ESS over the parameters and the most populated sky mode.
+    private static string ConvergenceText(GlobalFit.Engine.Fitting.SourceConvergence? c)
+    {
+        if (c is null) return "";
+        string mode = c.ModeNames.IsEmpty ? "-" : c.ModeNames[c.ModeFractions.IndexOf(c.ModeFractions.Max())];
+        string fraction = c.ModeNames.IsEmpty ? "" : I($" {c.ModeFractions.Max():F2}");
+        return I($"  {c.MaxSplitRhat,6:F3} {c.MinEffectiveSampleSize,7:F0}  {mode}{fraction}");
+    }
 
     // Errors in σ to one decimal; beyond ±9999.9 (an interval of almost no width) in exponent form, which keeps the column.
     internal static string SigmaText(double error) =>

@@ -17,6 +17,15 @@ public static class CatalogueCsvWriter
     /// <summary>Suffix of the column holding a parameter's 95 % quantile.</summary>
     public const string UpperSuffix = "_hi";
 
+    /// <summary>Suffix of the column holding a parameter's split R̂.</summary>
+    public const string RhatSuffix = "_rhat";
+
+    /// <summary>Suffix of the column holding a parameter's bulk effective sample size.</summary>
+    public const string EssSuffix = "_ess";
+
+    /// <summary>Prefix of the columns holding the fractions of a source's samples in each sky mode.</summary>
+    public const string ModePrefix = "sky_";
+
     /// <summary>Writes <paramref name="records"/> to <paramref name="path"/>, atomically.</summary>
     /// <param name="path">Destination.</param>
     /// <param name="records">The sources, written in this order.</param>
@@ -40,6 +49,14 @@ public static class CatalogueCsvWriter
         var text = new StringBuilder();
         var header = new List<string> { "id", "class", "confidence", "snr" };
         foreach (string name in parameters) header.AddRange([name, name + LowerSuffix, name + UpperSuffix]);
+        // Convergence columns only when some record reports it, so a catalogue without (noise only) keeps its old shape.
+        bool convergence = records.Any(r => r.Convergence is not null);
+        var modes = records.Where(r => r.Convergence is not null).SelectMany(r => r.Convergence!.ModeNames).Distinct(StringComparer.Ordinal).ToList();
+        if (convergence)
+        {
+            foreach (string name in parameters) header.AddRange([name + RhatSuffix, name + EssSuffix]);
+            header.AddRange(modes.Select(m => ModePrefix + m));
+        }
         text.AppendJoin(',', header.Select(Quote)).Append('\n');
         foreach (var r in records)
         {
@@ -48,6 +65,20 @@ public static class CatalogueCsvWriter
             {
                 int c = r.ParameterNames.IndexOf(name);
                 cells.AddRange(c < 0 ? ["", "", ""] : [Number(r.Median[c]), Number(r.Lower[c]), Number(r.Upper[c])]);
+            }
+            if (convergence)
+            {
+                var report = r.Convergence;
+                foreach (string name in parameters)
+                {
+                    int c = r.ParameterNames.IndexOf(name);
+                    cells.AddRange(c < 0 || report is null ? ["", ""] : [Number(report.SplitRhat[c]), Number(report.EffectiveSampleSize[c])]);
+                }
+                foreach (string mode in modes)
+                {
+                    int m = report is null ? -1 : report.ModeNames.IndexOf(mode);
+                    cells.Add(m < 0 ? "" : Number(report!.ModeFractions[m]));
+                }
             }
             text.AppendJoin(',', cells).Append('\n');
         }

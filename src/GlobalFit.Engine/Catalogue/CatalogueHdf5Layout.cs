@@ -36,6 +36,18 @@ public static class CatalogueHdf5Layout
     /// <summary>int64 [S]: the source row each sample row belongs to.</summary>
     public const string SampleSourceDataset = "sample_source";
 
+    /// <summary>float64 [R, C]: per-source split R̂ (present when the class reports convergence).</summary>
+    public const string SplitRhatDataset = "split_rhat";
+
+    /// <summary>float64 [R, C]: per-source bulk effective sample size (present with <see cref="SplitRhatDataset"/>).</summary>
+    public const string EssDataset = "ess";
+
+    /// <summary>float64 [R, M]: per-source fraction of samples in each sky mode (present with <see cref="SplitRhatDataset"/>).</summary>
+    public const string SkyModeDataset = "sky_mode_fraction";
+
+    /// <summary>Attribute of <see cref="SkyModeDataset"/>: the mode names, in column order.</summary>
+    public const string ModesAttribute = "modes";
+
     /// <summary>Options that write the compound members under their <see cref="H5NameAttribute"/> names.</summary>
     /// <remarks>PureHDF 2.2.0 names compound members after the C# fields, on writing and on reading alike, unless
     /// a field-name mapper says otherwise; without it the members were written `Id`, `Confidence`, ….</remarks>

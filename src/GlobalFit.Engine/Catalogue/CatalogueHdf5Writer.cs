@@ -49,7 +49,7 @@ public static class CatalogueHdf5Writer
             sampleEntry.AsSpan(checked((int)row), r.SampleCount).Fill(e);
             row += r.SampleCount;
         }
-        return new H5Group
+        var group = new H5Group
         {
             Attributes = { [L.ColumnsAttribute] = columns },
             [L.SourcesDataset] = sources,
@@ -59,6 +59,34 @@ public static class CatalogueHdf5Writer
             [L.SamplesDataset] = Table(samples, sampleRows, columns),
             [L.SampleSourceDataset] = sampleEntry,
         };
+        // Convergence tables only for a class whose sources report it (NaN rows for any that do not).
+        var modes = records.Select(r => r.Convergence).FirstOrDefault(c => c is not null)?.ModeNames;
+        if (modes is { } names)
+        {
+            var rhat = new double[median.Length];
+            var ess = new double[median.Length];
+            var fractions = new double[checked(records.Count * names.Length)];
+            for (int e = 0; e < records.Count; e++)
+            {
+                var c = records[e].Convergence;
+                if (c is null)
+                {
+                    rhat.AsSpan(e * width, width).Fill(double.NaN);
+                    ess.AsSpan(e * width, width).Fill(double.NaN);
+                    fractions.AsSpan(e * names.Length, names.Length).Fill(double.NaN);
+                    continue;
+                }
+                c.SplitRhat.CopyTo(rhat, e * width);
+                c.EffectiveSampleSize.CopyTo(ess, e * width);
+                c.ModeFractions.CopyTo(fractions, e * names.Length);
+            }
+            group[L.SplitRhatDataset] = Table(rhat, records.Count, columns);
+            group[L.EssDataset] = Table(ess, records.Count, columns);
+            var modeTable = new H5Dataset(fractions, fileDims: [(ulong)records.Count, (ulong)names.Length]);
+            modeTable.Attributes[L.ModesAttribute] = names.ToArray();
+            group[L.SkyModeDataset] = modeTable;
+        }
+        return group;
     }
 
     private static H5Dataset Table(double[] values, long rows, string[] columns)

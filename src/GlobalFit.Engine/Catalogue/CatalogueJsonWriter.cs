@@ -58,6 +58,14 @@ public static class CatalogueJsonWriter
             WriteSummary(json, "lower", r.ParameterNames, r.Lower);
             WriteSummary(json, "upper", r.ParameterNames, r.Upper);
             json.WriteNumber("sample_count", r.SampleCount);
+            if (r.Convergence is { } convergence)
+            {
+                json.WriteStartObject("convergence");
+                WriteSummary(json, "split_rhat", r.ParameterNames, convergence.SplitRhat);
+                WriteSummary(json, "ess", r.ParameterNames, convergence.EffectiveSampleSize);
+                WriteSummary(json, "sky_modes", convergence.ModeNames, convergence.ModeFractions);
+                json.WriteEndObject();
+            }
             if (!includeSamples)
             {
                 json.WriteEndObject();

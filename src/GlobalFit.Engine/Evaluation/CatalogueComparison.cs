@@ -93,7 +93,10 @@ public static class CatalogueComparison
             {
                 var source = sources[truthMatch[t]];
                 found.Add(new FoundInjection(truth.Ids[row], source.Id, snr, source.Snr, source.Confidence, overlapOf[t],
-                    Errors(source, values, columns, matcher.Periods), Covered(source, values, columns, matcher.Periods)));
+                    Errors(source, values, columns, matcher.Periods), Covered(source, values, columns, matcher.Periods))
+                {
+                    Convergence = source.Convergence,
+                });
             }
             else if (snr >= detectableSnr)
             {
@@ -239,7 +242,11 @@ public sealed record ClassComparison(string ClassId, string Rule, double Thresho
 /// <param name="ErrorsInSigma">(median − truth)/σ per parameter (NaN where the interval has no width).</param>
 /// <param name="InsideInterval">Per parameter, whether the truth lies in the 90 % interval.</param>
 public sealed record FoundInjection(string TruthId, string SourceId, double InjectedSnr, double SourceSnr, double Confidence, double Overlap,
-    ImmutableArray<double> ErrorsInSigma, ImmutableArray<bool> InsideInterval);
+    ImmutableArray<double> ErrorsInSigma, ImmutableArray<bool> InsideInterval)
+{
+    /// <summary>The source's convergence report (in the source's own parameter order), when its class gives one.</summary>
+    public SourceConvergence? Convergence { get; init; }
+}
 
 /// <summary>A detectable injection nothing matched.</summary>
 /// <param name="TruthId">The injection.</param>

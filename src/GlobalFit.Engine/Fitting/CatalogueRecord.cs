@@ -15,6 +15,9 @@ namespace GlobalFit.Engine.Fitting;
 public sealed record CatalogueRecord(string Id, string ClassId, double Confidence, double Snr, ImmutableArray<string> ParameterNames,
     ImmutableArray<double> Median, ImmutableArray<double> Lower, ImmutableArray<double> Upper, ImmutableArray<double> Samples)
 {
+    /// <summary>How well the source's chain mixed; null for a class that does not report it (e.g. the noise row).</summary>
+    public SourceConvergence? Convergence { get; init; }
+
     /// <summary>Number of posterior samples.</summary>
     public int SampleCount => ParameterNames.Length == 0 ? 0 : Samples.Length / ParameterNames.Length;
 }

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using System.Numerics;
+using GlobalFit.Engine.Fitting;
 using GlobalFit.Physics.GalacticBinaries;
 using GlobalFit.Physics.Series;
 
@@ -30,6 +31,7 @@ public sealed class CatalogueBuilder
     private readonly List<Entry> _entries = [];
     private readonly Complex[] _scratchA;
     private readonly Complex[] _scratchE;
+    private readonly GalacticBinarySkyModes _skyModes;
     private long _sampleCount;
 
     /// <summary>Creates a builder for sources whose templates lie in <paramref name="bins"/>.</summary>
@@ -53,6 +55,7 @@ public sealed class CatalogueBuilder
         _inverseE = inverseE;
         _dfHz = generator.FrequencyResolutionHz;
         MatchThreshold = matchThreshold;
+        _skyModes = new GalacticBinarySkyModes(generator);
         _scratchA = new Complex[generator.MaximumEnvelopeLength];
         _scratchE = new Complex[generator.MaximumEnvelopeLength];
     }
@@ -123,7 +126,13 @@ public sealed class CatalogueBuilder
             Quantile(members.Select(m => Wrap(m.PolarisationRad, Math.PI)), quantile),
             Quantile(members.Select(m => Wrap(m.InitialPhaseRad, 2 * Math.PI)), quantile),
             Quantile(members.Select(m => m.SecondFrequencyDerivativeHzS2), quantile));
-        return new CatalogueEntry((double)members.Count / _sampleCount, members.Count, At(0.5), At(0.05), At(0.95), Quantile(entry.Snrs, 0.5), [.. members]);
+        var rows = members.Select(m => m.ToTableRow()).ToList();
+        int width = GalacticBinaryParameters.TableColumnNames.Length;
+        var rhat = new double[width];
+        var ess = new double[width];
+        for (int c = 0; c < width; c++) (rhat[c], ess[c]) = SourceConvergence.Of(rows.Select(r => r[c]).ToList());
+        var convergence = new SourceConvergence([.. rhat], [.. ess], GalacticBinarySkyModes.Names, _skyModes.Fractions(members));
+        return new CatalogueEntry((double)members.Count / _sampleCount, members.Count, At(0.5), At(0.05), At(0.95), Quantile(entry.Snrs, 0.5), [.. members], convergence);
     }
 
     /// <summary>The type-7 sample quantile (linear interpolation between order statistics).</summary>

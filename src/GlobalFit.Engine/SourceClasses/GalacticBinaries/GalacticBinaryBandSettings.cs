@@ -16,8 +16,14 @@ public sealed record GalacticBinaryBandSettings
         "f_min_hz", "f_max_hz", "window_bins", "margin_bins", "max_sources_per_window", "fdot_min_hz_s", "fdot_max_hz_s",
         "steps_per_update", "temperatures", "chains_per_temperature", "max_temperature", "jump_probability",
         "snr_prior_peak", "snr_max", "include_t", "fstat_cells_per_bin", "fstat_latitude_cells", "fstat_longitude_cells",
-        "fisher_refresh_steps", "sample_interval", "split_merge_probability", "split_merge_bins", "catalogue_min_snr",
+        "fisher_refresh_steps", "sample_interval", "split_merge_probability", "split_merge_bins", "catalogue_min_snr", "sky_prior",
     ];
+
+    /// <summary>Value of <c>sky_prior</c> for the isotropic sky.</summary>
+    public const string IsotropicSky = "isotropic";
+
+    /// <summary>Value of <c>sky_prior</c> for <see cref="GalacticSkyDensity"/> from the built-in population model's defaults.</summary>
+    public const string GalaxySky = "galaxy";
 
     /// <summary>Lower edge of the analysed range [<c>f_min_hz</c>].</summary>
     /// <value>Hz.</value>
@@ -73,6 +79,11 @@ public sealed record GalacticBinaryBandSettings
     /// mostly blends of several weak binaries or noise fluctuations that match no single source, so a catalogue is
     /// thresholded there (0 keeps everything).</remarks>
     public double CatalogueMinSnr { get; init; } = 5.0;
+
+    /// <summary>The sky prior [<c>sky_prior</c>]: <see cref="IsotropicSky"/> (default) or <see cref="GalaxySky"/>, the sky of
+    /// the catalogue-loud binaries of the built-in population model with its default disc and chirp masses
+    /// (<see cref="GalacticSkyDensity"/>); choose it when the binaries come from the Galaxy, as in the demo.</summary>
+    public string SkyPrior { get; init; } = IsotropicSky;
 
     /// <summary>ρ*, the SNR at which the amplitude prior peaks [<c>snr_prior_peak</c>].</summary>
     public double SnrPriorPeak { get; init; } = 10.0;
@@ -134,6 +145,7 @@ public sealed record GalacticBinaryBandSettings
             FisherRefreshSteps = (int)table.GetInteger("fisher_refresh_steps", defaults.FisherRefreshSteps, 0, 1_000_000),
             SampleInterval = (int)table.GetInteger("sample_interval", defaults.SampleInterval, 1, 1_000_000),
             CatalogueMinSnr = table.GetNonNegative("catalogue_min_snr", defaults.CatalogueMinSnr),
+            SkyPrior = table.GetChoice("sky_prior", defaults.SkyPrior, IsotropicSky, GalaxySky),
         };
         table.RejectUnknownKeys(Keys);
         try

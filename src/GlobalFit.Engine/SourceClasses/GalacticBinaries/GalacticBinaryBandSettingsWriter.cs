@@ -36,5 +36,6 @@ public static class GalacticBinaryBandSettingsWriter
         writer.Key("fisher_refresh_steps", settings.FisherRefreshSteps);
         writer.Key("sample_interval", settings.SampleInterval);
         writer.Key("catalogue_min_snr", settings.CatalogueMinSnr);
+        writer.Key("sky_prior", settings.SkyPrior);
     }
 }

@@ -21,8 +21,9 @@ namespace GlobalFit.Engine.SourceClasses.GalacticBinaries;
 /// against the new residual, and continues the sampler from its saved state for the requested number of steps. Moves:
 /// birth and death (probability <c>jump_probability</c>), split and merge of nearby sources (<see cref="GalacticBinarySplitMerge"/>,
 /// probability <c>split_merge_probability</c>), otherwise one source moved by a Gaussian from that source's own Fisher matrix
-/// (<see cref="LocalFisherGaussianProposal"/>, weight 0.4), Fisher-eigen jumps of the Inference library (0.15),
-/// differential evolution (0.15), adaptive Gaussian (0.1), the antipodal sky reflection (0.1) or a fresh draw of the
+/// (<see cref="LocalFisherGaussianProposal"/>, weight 0.3), Fisher-eigen jumps of the Inference library (0.1),
+/// differential evolution (0.1), adaptive Gaussian (0.05), a Doppler-compensated sky jump with fresh amplitudes
+/// (<see cref="DopplerSkyJumpProposal"/>, 0.5) or a fresh draw of the
 /// birth density (<see cref="BirthDensityJumpProposal"/>, 0.1). The prior is
 /// <see cref="GalacticBinarySourcePrior"/> with a uniform count prior on 0 … <c>max_sources_per_window</c>.</para>
 /// <para>A new worker's chains start from the sources of <see cref="GreedyFStatisticSearch"/> on its first residual
@@ -43,6 +44,8 @@ public sealed class GalacticBinaryBandWorker
     private readonly GalacticBinaryToolPool _tools;
     private readonly GalacticBinarySourcePrior _prior;
     private GalacticBinaryBandWorkerState _state;
+    private GalacticBinarySourcePrior? _galaxyPrior;
+    private double _galaxyPriorScale;
 
     /// <summary>Creates a worker with no sources yet.</summary>
     /// <param name="settings">The galactic-binary settings.</param>
@@ -150,7 +153,7 @@ public sealed class GalacticBinaryBandWorker
             ? _state.SnrScale
             : GalacticBinaryBandModel.AverageSnrPerUnitAmplitude(generator, residual, 0.5 * (Window.CoreStartHz + Window.CoreEndHz));
         int chains = _settings.TemperatureCount * _settings.ChainsPerTemperature;
-        var model = new GalacticBinaryBandModel(generator, _prior, residual, snrScale, _settings.MaxSourcesPerWindow,
+        var model = new GalacticBinaryBandModel(generator, Prior(snrScale), residual, snrScale, _settings.MaxSourcesPerWindow,
             4 * chains * _settings.MaxSourcesPerWindow + 256) { Clock = phases };
         Lap(BandUpdatePhase.ModelSetup);
         // Births and the starting search cover the core only: a source enters a drift margin only by moving there, and is
@@ -162,7 +165,9 @@ public sealed class GalacticBinaryBandWorker
         Lap(BandUpdatePhase.FStatisticMap);
         var birth = new GalacticBinaryBirthDensity(statistic, residual, map, snrScale) { Clock = phases };
         var fisher = new GalacticBinarySourceFisher(generator, residual, snrScale, _prior.Schema, 8 * chains * _settings.MaxSourcesPerWindow + 256) { Clock = phases };
-        var samplerSettings = SamplerSettings(fisher, birth);
+        var samplerSettings = SamplerSettings(fisher, birth, DopplerSkyJumpProposal.Spec(0.5, birth,
+            DopplerSkyJumpProposal.Geometry(generator.Orbits, generator.StartSeconds, generator.DurationSeconds), snrScale,
+            Window.SourceStartHz, Window.SourceEndHz));
         Lap(BandUpdatePhase.ProposalSetup);
         var start = _state.Sampler;
         if (start is null)
@@ -188,6 +193,19 @@ public sealed class GalacticBinaryBandWorker
         var statistics = new GalacticBinaryBandStatistics(steps, sampler.Step, sampler.SourceCount(0), sampler.LogLikelihood(0),
             clock.Elapsed, sampler.GetStatistics()) { Phases = phases.Snapshot() };
         return new GalacticBinaryBandUpdate(Window.Index, template, collector.Samples.ToImmutable(), statistics);
+    }
+
+    // The galaxy sky needs the SNR scale, known from the first update on; it is rebuilt (deterministically) once per worker.
+    private GalacticBinarySourcePrior Prior(double snrScale)
+    {
+        if (_settings.SkyPrior != GalacticBinaryBandSettings.GalaxySky) return _prior;
+        if (_galaxyPrior is null || _galaxyPriorScale != snrScale)
+        {
+            var sky = new GalacticSkyDensity(GalacticPopulationSettings.Defaults, 0.5 * (Window.CoreStartHz + Window.CoreEndHz), snrScale,
+                Math.Max(_settings.CatalogueMinSnr, 1.0));
+            (_galaxyPrior, _galaxyPriorScale) = (_prior.WithSky(sky), snrScale);
+        }
+        return _galaxyPrior;
     }
 
     /// <summary>The sources of the first cold chain now.</summary>
@@ -277,7 +295,7 @@ public sealed class GalacticBinaryBandWorker
         return adopted;
     }
 
-    private ReversibleJumpSettings SamplerSettings(GalacticBinarySourceFisher fisher, GalacticBinaryBirthDensity birth) => new()
+    private ReversibleJumpSettings SamplerSettings(GalacticBinarySourceFisher fisher, GalacticBinaryBirthDensity birth, ProposalSpec skyJump) => new()
     {
         Tempering = new TemperingSettings
         {
@@ -287,11 +305,11 @@ public sealed class GalacticBinaryBandWorker
         },
         WithinProposals =
         [
-            LocalFisherGaussianProposal.Spec(0.4, fisher),
-            ProposalSpec.FisherEigen(0.15, fisher, _settings.FisherRefreshSteps),
-            ProposalSpec.DifferentialEvolution(0.15),
-            ProposalSpec.AdaptiveGaussian(0.1),
-            AntipodalSkyProposal.Spec(0.1),
+            LocalFisherGaussianProposal.Spec(0.3, fisher),
+            ProposalSpec.FisherEigen(0.1, fisher, _settings.FisherRefreshSteps),
+            ProposalSpec.DifferentialEvolution(0.1),
+            ProposalSpec.AdaptiveGaussian(0.05),
+            skyJump,
             BirthDensityJumpProposal.Spec(0.1, birth),
         ],
         MaxSources = _settings.MaxSourcesPerWindow,

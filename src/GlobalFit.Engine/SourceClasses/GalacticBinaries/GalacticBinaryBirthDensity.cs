@@ -72,15 +72,40 @@ public sealed class GalacticBinaryBirthDensity : IBirthDensity
     private double DrawUntimed(Span<double> source, ref RandomStream random)
     {
         var point = _map.Draw(random.NextDouble(), random.NextDouble(), random.NextDouble(), random.NextDouble(), random.NextDouble());
+        double logExtrinsic = DrawExtrinsics(point, 1.0, source, ref random);
+        return logExtrinsic > double.NegativeInfinity ? _map.LogDensity(point) + logExtrinsic : double.NegativeInfinity;
+    }
+
+    private double LogDensityUntimed(ReadOnlySpan<double> source)
+    {
+        var point = GalacticBinaryIntrinsics.Of(ToParameters(source, _snrScale));
+        double logMap = _map.LogDensity(point);
+        if (!(logMap > double.NegativeInfinity)) return double.NegativeInfinity;
+        double logExtrinsic = LogExtrinsicDensity(source, 1.0);
+        return logExtrinsic > double.NegativeInfinity ? logMap + logExtrinsic : double.NegativeInfinity;
+    }
+
+    /// <summary>Writes a source with the intrinsic parameters of <paramref name="point"/> and the four amplitudes drawn
+    /// from their conditional Gaussian at inverse temperature <paramref name="inverseTemperature"/>, N(G⁻¹n, (βG)⁻¹)
+    /// (the tempered likelihood β ln L has the same mean and a β times sharper precision).</summary>
+    /// <param name="point">f0, ḟ, β, λ of the source.</param>
+    /// <param name="inverseTemperature">β in (0, 1].</param>
+    /// <param name="source">Destination: the 8 sampled coordinates.</param>
+    /// <param name="random">Stream for four normals and one uniform.</param>
+    /// <returns>ln of the density of (ρ̂, cos ι, ψ, φ0) given the intrinsic parameters; −∞ where the F-statistic is
+    /// undefined (no bin of the template inside the band).</returns>
+    public double DrawExtrinsics(in GalacticBinaryIntrinsics point, double inverseTemperature, Span<double> source, ref RandomStream random)
+    {
         var result = _statistic.Evaluate(point, _band);
         if (!result.IsDefined) return double.NegativeInfinity;
         var (l11, l21, l22) = Cholesky(result);
+        double spread = 1.0 / Math.Sqrt(inverseTemperature);
         Complex xi1 = new(random.NextGaussian(), random.NextGaussian());
         Complex xi2 = new(random.NextGaussian(), random.NextGaussian());
-        // Solve L^H ζ = ξ: L^H = [[l11, conj(l21)], [0, l22]].
+        // Solve L^H ζ = ξ: L^H = [[l11, conj(l21)], [0, l22]]; then ζ/√β has covariance (βG)⁻¹.
         Complex zeta2 = xi2 / l22;
         Complex zeta1 = (xi1 - Complex.Conjugate(l21) * zeta2) / l11;
-        var amplitudes = FStatisticAmplitudes.FromComplex(result.Amplitudes.P + zeta1, result.Amplitudes.Q + zeta2);
+        var amplitudes = FStatisticAmplitudes.FromComplex(result.Amplitudes.P + spread * zeta1, result.Amplitudes.Q + spread * zeta2);
         var extrinsics = amplitudes.ToExtrinsics();
         double psi = extrinsics.PolarisationRad, phi = extrinsics.InitialPhaseRad;
         if (random.NextDouble() < 0.5)
@@ -97,25 +122,28 @@ public sealed class GalacticBinaryBirthDensity : IBirthDensity
         source[Polarisation] = psi;
         source[Phase] = phi;
         double quadratic = xi1.Real * xi1.Real + xi1.Imaginary * xi1.Imaginary + xi2.Real * xi2.Real + xi2.Imaginary * xi2.Imaginary;
-        return _map.LogDensity(point) + LogGaussian(result, quadratic) + LogJacobian(extrinsics.Amplitude, extrinsics.CosInclination);
+        return LogGaussian(result, quadratic, inverseTemperature) + LogJacobian(extrinsics.Amplitude, extrinsics.CosInclination);
     }
 
-    private double LogDensityUntimed(ReadOnlySpan<double> source)
+    /// <summary>ln of the density with which <see cref="DrawExtrinsics"/> at the intrinsic parameters of
+    /// <paramref name="source"/> would draw its (ρ̂, cos ι, ψ, φ0).</summary>
+    /// <param name="source">The 8 sampled coordinates.</param>
+    /// <param name="inverseTemperature">β in (0, 1].</param>
+    /// <returns>The log density; −∞ where the F-statistic is undefined.</returns>
+    public double LogExtrinsicDensity(ReadOnlySpan<double> source, double inverseTemperature)
     {
         var parameters = ToParameters(source, _snrScale);
         var point = GalacticBinaryIntrinsics.Of(parameters);
-        double logMap = _map.LogDensity(point);
-        if (!(logMap > double.NegativeInfinity)) return double.NegativeInfinity;
         var result = _statistic.Evaluate(point, _band);
         if (!result.IsDefined) return double.NegativeInfinity;
         var x = FStatisticAmplitudes.FromExtrinsics(new GalacticBinaryExtrinsics(parameters.Amplitude, source[CosInclination],
             parameters.PolarisationRad, parameters.InitialPhaseRad));
         Complex dp = x.P - result.Amplitudes.P, dq = x.Q - result.Amplitudes.Q;
-        // ζ^H G ζ with G = [[U, W*], [W, V]].
+        // ζ^H G ζ with G = [[U, W*], [W, V]]; the draw's ξ^H ξ is β ζ^H G ζ.
         double quadratic = result.U * (dp.Real * dp.Real + dp.Imaginary * dp.Imaginary)
             + result.V * (dq.Real * dq.Real + dq.Imaginary * dq.Imaginary)
             + 2.0 * (Complex.Conjugate(dq) * result.W * dp).Real;
-        return logMap + LogGaussian(result, quadratic) + LogJacobian(parameters.Amplitude, source[CosInclination]);
+        return LogGaussian(result, inverseTemperature * quadratic, inverseTemperature) + LogJacobian(parameters.Amplitude, source[CosInclination]);
     }
 
     /// <summary>ln of |∂(Re P, Im P, Re Q, Im Q)/∂(A, cos ι, ψ, φ0)| = ln 4A³(1 − cos²ι)³.</summary>
@@ -130,10 +158,11 @@ public sealed class GalacticBinaryBirthDensity : IBirthDensity
     private double LogJacobian(double amplitude, double cosInclination) =>
         LogAmplitudeJacobian(amplitude, cosInclination) - Math.Log(2.0) - Math.Log(_snrScale);
 
-    private static double LogGaussian(in FStatisticResult result, double quadratic)
+    // The real 4 × 4 precision of βG has determinant β⁴ (det G)², so the normalisation gains 2 ln β.
+    private static double LogGaussian(in FStatisticResult result, double quadratic, double inverseTemperature)
     {
         double determinant = result.U * result.V - (result.W.Real * result.W.Real + result.W.Imaginary * result.W.Imaginary);
-        return -0.5 * quadratic - LogTwoPiSquared + Math.Log(determinant);
+        return -0.5 * quadratic - LogTwoPiSquared + Math.Log(determinant) + 2.0 * Math.Log(inverseTemperature);
     }
 
     private static (double L11, Complex L21, double L22) Cholesky(in FStatisticResult result)

@@ -113,7 +113,10 @@ public sealed class GalacticBinaryClassCatalogue : IClassCatalogue
             var samples = ImmutableArray.CreateBuilder<double>(entry.Members.Length * GalacticBinaryParameters.TableColumnNames.Length);
             foreach (var member in entry.Members) samples.AddRange(member.ToTableRow());
             records.Add(new CatalogueRecord(id, ClassId, entry.Confidence, entry.MedianSnr, GalacticBinaryParameters.TableColumnNames,
-                [.. entry.Median.ToTableRow()], [.. entry.Lower.ToTableRow()], [.. entry.Upper.ToTableRow()], samples.MoveToImmutable()));
+                [.. entry.Median.ToTableRow()], [.. entry.Lower.ToTableRow()], [.. entry.Upper.ToTableRow()], samples.MoveToImmutable())
+            {
+                Convergence = entry.Convergence,
+            });
         }
         return records.MoveToImmutable();
     }

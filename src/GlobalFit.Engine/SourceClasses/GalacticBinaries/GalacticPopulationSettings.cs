@@ -29,6 +29,9 @@ public sealed record GalacticPopulationSettings(
         "chirp_mass_min_msun", "chirp_mass_max_msun", "disc_scale_length_kpc", "disc_scale_height_kpc", "sun_radius_kpc",
     ];
 
+    /// <summary>The model with every key at its default (count 1000, 0.5–5 mHz).</summary>
+    public static GalacticPopulationSettings Defaults { get; } = new(1000, 5e-4, 5e-3, -11.0 / 3.0, 0.35, 0.1, 0.15, 1.0, 2.5, 0.3, 8.0);
+
     /// <summary>Reads and validates <c>[galactic_binaries.population]</c>.</summary>
     public static GalacticPopulationSettings FromConfig(ConfigTable table)
     {

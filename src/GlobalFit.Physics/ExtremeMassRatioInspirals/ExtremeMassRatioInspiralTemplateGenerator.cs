@@ -63,6 +63,7 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
     private readonly double[] _coefficient;
     private readonly double[] _energy;
     private readonly int[] _order;
+    private ExtremeMassRatioInspiralParameters? _evolvedFor;
 
     /// <summary>Creates the generator for a record of <paramref name="durationSeconds"/> sampled every
     /// <paramref name="cadenceSeconds"/>, starting at <paramref name="startSeconds"/> on the orbits' time axis.</summary>
@@ -222,13 +223,20 @@ public sealed class ExtremeMassRatioInspiralTemplateGenerator
     private int Prepare(in ExtremeMassRatioInspiralParameters parameters, double begin, double end)
     {
         var source = _source;
-        source.Set(parameters);
-        var equations = source.Equations;
         Span<double> state = stackalloc double[KludgeOrbitEquations.StateSize];
         Span<double> rates = stackalloc double[KludgeOrbitEquations.StateSize];
-        source.InitialState(state);
         double margin = 2 * PhysicalConstants.AstronomicalUnitM / PhysicalConstants.SpeedOfLightMS;
-        _trajectory.Evolve(equations, state, DurationSeconds + margin, _settings.CoarseStepSeconds);
+        // The segments of a semi-coherent statistic ask for the same source many times in a row: the orbit is integrated
+        // once for them all (the source and trajectory depend on the parameters only).
+        if (_evolvedFor != parameters)
+        {
+            _evolvedFor = null;
+            source.Set(parameters);
+            source.InitialState(state);
+            _trajectory.Evolve(source.Equations, state, DurationSeconds + margin, _settings.CoarseStepSeconds);
+            _evolvedFor = parameters;
+        }
+        var equations = source.Equations;
         LastPlunged = _trajectory.Plunged && _trajectory.EndSeconds < DurationSeconds + margin;
         double plunge = _trajectory.EndSeconds;
 

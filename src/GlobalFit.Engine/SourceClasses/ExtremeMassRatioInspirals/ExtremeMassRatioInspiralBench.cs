@@ -9,8 +9,8 @@ using GlobalFit.Physics.Series;
 namespace GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
 
 /// <summary>Quick timing of the fast inspiral template with its log-likelihood (one Julian year at 10 s; M = 1e6,
-/// μ = 10, χ = 0.5, e0 = 0.2), its ratio to the direct time-domain path, and the semi-coherent statistic's cost per
-/// segment.</summary>
+/// μ = 10, χ = 0.5, e0 = 0.2), its ratio to the direct time-domain path, the semi-coherent statistic's cost per
+/// segment and the blind search's per year of data.</summary>
 /// <remarks>The likelihood loop runs for one second after half a second of warm-up (so the timed code is the
 /// optimised one). The direct path costs several seconds for a year, so it is timed over 30 days and scaled to the year
 /// by the sample count (its cost is per sample); the whole suite takes a few seconds.</remarks>
@@ -63,6 +63,21 @@ internal static class ExtremeMassRatioInspiralBench
         }
         double segmentMilliseconds = 1e3 * clock.Elapsed.TotalSeconds / (evaluations * SearchSegments);
 
+        // The blind search's default budget over the same year: its evaluations at its first stage's segment count (the
+        // later stages use fewer segments, so this is an upper bound).
+        var defaults = new InspiralBlindSearchSettings();
+        var blind = new SemiCoherentStatistic(generator, window, defaults.Segments, dataA, dataE, inverseA, inverseE);
+        sink += blind.Evaluate(Source);
+        long blindEvaluations = 0;
+        clock.Restart();
+        while (clock.Elapsed.TotalSeconds < 1.0)
+        {
+            sink += blind.Evaluate(Source with { Phi0Rad = 0.4 + 1e-6 * blindEvaluations });
+            blindEvaluations++;
+        }
+        long budget = defaults.Draws + 2L * defaults.Chains * defaults.ChainSteps + defaults.Chains;
+        double blindSearchSeconds = clock.Elapsed.TotalSeconds / blindEvaluations * budget;
+
         int directSamples = (int)(DirectDays * 86_400 / Cadence);
         var direct = new ExtremeMassRatioInspiralDirectWaveform(directSamples, Cadence);
         GC.KeepAlive(new ExtremeMassRatioInspiralDirectWaveform(directSamples / 30, Cadence).Spectra(Source)); // warm-up
@@ -76,6 +91,8 @@ internal static class ExtremeMassRatioInspiralBench
             $"direct time-domain path for the same year, seconds (timed over {DirectDays:F0} days, scaled by samples)");
         yield return new BenchFigure("emri_semicoherent_ms_per_segment", segmentMilliseconds,
             $"semi-coherent statistic, milliseconds per segment ({SearchSegments} segments of the same year; one evaluation costs {SearchSegments} of these)");
+        yield return new BenchFigure("emri_blind_search_s_per_year", blindSearchSeconds,
+            $"blind search with the default budget ({budget} semi-coherent evaluations, {defaults.Segments} then 8 segments) over the same year, seconds, one core");
         yield return new BenchFigure("emri_speedup_over_direct_path", directYearSeconds * perSecond,
             "same source: direct path time / fast template + log-likelihood time");
     }

@@ -29,6 +29,11 @@ namespace GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
 /// differential evolution (0.2; ter Braak 2006). Measured on the ten-realisation P–P set: Kolmogorov distance 0.074
 /// with this mixture, 0.087 with Fisher 0.7 and differential evolution 0.3.
 /// Chain c draws from (run seed, <see cref="StreamId"/>, c), the search from (run seed, stream id, 2⁶⁴ − 2).</para>
+/// <para>Blind workers (no start row): until a search succeeds, each of the first <c>search_updates</c> updates runs
+/// <see cref="InspiralBlindSearch"/> over the search box against its residual (stream (run seed, stream id, 2⁶⁴ − 3,
+/// update)); a candidate whose significance reaches <c>detection_significance</c> becomes the start row and the worker
+/// continues as above within the same update; otherwise the update reports no source (a zero template, no samples),
+/// and after <c>search_updates</c> such updates the worker stays empty for the rest of the run.</para>
 /// <para>Samples: every step's first cold chain, in the physical columns
 /// (<see cref="ExtremeMassRatioInspiralParameters.ColumnNames"/>), angles wrapped into [0, 2π).</para>
 /// <para>Not thread-safe.</para>
@@ -36,6 +41,7 @@ namespace GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
 internal sealed class InspiralWorker : IFitWorker
 {
     private const ulong SearchStream = ulong.MaxValue - 1;
+    private const ulong BlindStream = ulong.MaxValue - 2;
 
     // First guesses of the scales: the Fisher differences step 0.05 of these, small against any inspiral's posterior
     // width, so the first pass stays linear (ln M, ln μ, χ, ν0/ν0, e0, then directions, ln D and phases).
@@ -47,13 +53,15 @@ internal sealed class InspiralWorker : IFitWorker
     private readonly InspiralFitSettings _settings;
     private readonly ExtremeMassRatioInspiralTemplateGenerator _generator;
     private readonly ExtremeMassRatioInspiralPrior _prior;
+    private readonly bool _blind;
     private InspiralWorkerState _state;
     private WindowSpectra? _template;
 
     /// <summary>Creates (or restores) the worker.</summary>
     public InspiralWorker(string id, ulong streamId, BinWindow bins, InspiralFitSettings settings,
-        ExtremeMassRatioInspiralTemplateGenerator generator, ExtremeMassRatioInspiralPrior prior, InspiralWorkerState state)
+        ExtremeMassRatioInspiralTemplateGenerator generator, ExtremeMassRatioInspiralPrior prior, InspiralWorkerState state, bool blind = false)
     {
+        _blind = blind;
         Id = id;
         StreamId = streamId;
         Bins = bins;
@@ -95,6 +103,13 @@ internal sealed class InspiralWorker : IFitWorker
         if (residual.Bins != Bins) throw new ArgumentException($"residual covers bins {residual.Bins}, worker {Id} needs {Bins}", nameof(residual));
         var clock = Stopwatch.StartNew();
         var (a, e) = (residual.Spectra.A, residual.Spectra.E);
+        if (_blind && _state.Sampler is null && !Searched(residual))
+        {
+            _state = _state with { Updates = _state.Updates + 1 };
+            _template = WindowSpectra.Zero(Bins, false);
+            var empty = new SampleBlock(Id, ExtremeMassRatioInspiralClass.Id, 0, [.. ExtremeMassRatioInspiralParameters.ColumnNames], [], [], []);
+            return new WorkerUpdate(_template, empty, new WorkerStatistics(steps, 0, 0, 0, 0, clock.Elapsed));
+        }
         InspiralFitModel model;
         ParallelTemperingState saved;
         if (_state.Sampler is null || _state.Reference is null || _state.Scales is null)
@@ -148,6 +163,21 @@ internal sealed class InspiralWorker : IFitWorker
     {
         ArgumentNullException.ThrowIfNull(handovers);
         if (handovers.Count > 0) throw new InvalidOperationException($"inspiral worker {Id} adopts no sources");
+    }
+
+    // A blind worker's search of this update's residual: true when its candidate is significant (it becomes the worker's
+    // start), false when the worker reports no source this update (after search_updates updates it no longer searches).
+    private bool Searched(WorkerResidual residual)
+    {
+        if (_state.Updates >= _settings.SearchUpdates) return false;
+        var random = RandomStream.ForPath(_state.RunSeed, [StreamId, BlindStream, (ulong)_state.Updates]);
+        var result = InspiralBlindSearch.Run(_generator, Bins, residual.Spectra.A, residual.Spectra.E, residual.InverseA, residual.InverseE,
+            _settings.Box ?? InspiralSearchBox.Of(_prior), _settings.Blind ?? new InspiralBlindSearchSettings(), _settings.SearchSegments, ref random);
+        _state = _state with { BlindSignificance = result.Significance };
+        if (!(result.Significance >= _settings.DetectionSignificance)) return false;
+        double distance = Math.Clamp(result.Best.DistanceMpc, _prior.MinDistanceMpc * (1 + 1e-9), _prior.MaxDistanceMpc * (1 - 1e-9));
+        _state = _state with { Current = (result.Best with { DistanceMpc = distance }).ToArray() };
+        return true;
     }
 
     private InspiralFitModel Model(InspiralSamplingCoordinates coordinates, Complex[] a, Complex[] e, double[] inverseA, double[] inverseE) =>

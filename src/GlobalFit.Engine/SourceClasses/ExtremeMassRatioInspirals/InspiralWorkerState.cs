@@ -14,6 +14,8 @@ namespace GlobalFit.Engine.SourceClasses.ExtremeMassRatioInspirals;
 /// <param name="Sampler">The parallel-tempering state; null before the first update.</param>
 /// <param name="SearchStatistic">The semi-coherent statistic ρ²_sc of the start search's result, NaN before it or
 /// without a search.</param>
+/// <param name="BlindSignificance">The significance of the last blind search's candidate
+/// (<see cref="InspiralBlindSearchResult.Significance"/>); NaN for a worker started from a row or before its first search.</param>
 [MessagePackObject]
 public sealed record InspiralWorkerState(
     [property: Key(0)] ulong RunSeed,
@@ -22,4 +24,5 @@ public sealed record InspiralWorkerState(
     [property: Key(3)] double[]? Scales,
     [property: Key(4)] double[] Current,
     [property: Key(5)] ParallelTemperingState? Sampler,
-    [property: Key(6)] double SearchStatistic);
+    [property: Key(6)] double SearchStatistic,
+    [property: Key(7)] double BlindSignificance = double.NaN);

@@ -66,7 +66,32 @@ public sealed class InspiralFitRunTests : IDisposable
         Assert.Contains("extreme_mass_ratio_inspirals", csv, StringComparison.Ordinal);
     }
 
-    private string Config(string run, int threads)
+    [Fact]
+    public void A_blind_worker_that_finds_nothing_leaves_no_catalogue_row_and_the_run_completes()
+    {
+        // The threshold is set out of reach, so the blind worker (over a box around the source, whose window overlaps the
+        // start row's) stays empty whatever its tiny search finds: zero templates and sample blocks without samples go
+        // through the runner, the store, the checkpoints and the catalogue.
+        const string Blind = """
+            count = 2
+            search_draws = 10
+            search_chains = 1
+            search_chain_steps = 3
+            search_updates = 1
+            detection_significance = 1e6
+            search_central_mass_min_msun = 4e5
+            search_central_mass_max_msun = 6e5
+            search_orbital_frequency_min_hz = 1.15e-3
+            search_orbital_frequency_max_hz = 1.25e-3
+            search_eccentricity_max = 0.2
+            """;
+        Assert.Equal(FitOutcomeKind.Completed, FitRunFixture.Fit(Config("blind", threads: 2, Blind)).Outcome.Kind);
+        string csv = File.ReadAllText(_folder.File("blind", "catalogue.csv"));
+        Assert.Contains("emri-0001", csv, StringComparison.Ordinal);
+        Assert.DoesNotContain("emri-0002", csv, StringComparison.Ordinal);
+    }
+
+    private string Config(string run, int threads, string extraKeys = "")
     {
         string path = _folder.File(run + ".toml");
         File.WriteAllText(path, $"""
@@ -81,6 +106,7 @@ public sealed class InspiralFitRunTests : IDisposable
             steps_per_update = 15
             temperatures = 2
             search_evaluations = 30
+            {extraKeys}
             [[extreme_mass_ratio_inspirals.start]]
             id = "one"
             central_mass_msun = 5e5

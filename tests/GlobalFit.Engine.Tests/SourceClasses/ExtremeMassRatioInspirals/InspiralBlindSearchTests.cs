@@ -15,28 +15,14 @@ public class InspiralBlindSearchTests
 {
     private static readonly ExtremeMassRatioInspiralParameters Source = InspiralFitFixture.Source;
 
-    // A box around the fixture's source (M 5e5, μ 10, χ 0.6, ν0 1.2e-3 Hz, e0 0.15), as a user who knows roughly where
-    // to look would give it.
-    private const string NarrowBox = """
-        search_central_mass_min_msun = 4e5
-        search_central_mass_max_msun = 6e5
-        search_compact_mass_min_msun = 8
-        search_compact_mass_max_msun = 12
-        search_spin_min = 0.4
-        search_spin_max = 0.8
-        search_orbital_frequency_min_hz = 1.15e-3
-        search_orbital_frequency_max_hz = 1.25e-3
-        search_eccentricity_min = 0.1
-        search_eccentricity_max = 0.2
-        """;
 
     private static InspiralFitPlan BlindPlan(string keys) =>
-        InspiralFitPlan.FromConfig(InspiralFitFixture.Section("count = 1\n" + NarrowBox + "\n" + keys), InspiralFitFixture.Month);
+        InspiralFitPlan.FromConfig(InspiralFitFixture.Section("count = 1\n" + InspiralFitFixture.SearchBoxKeys + "\n" + keys), InspiralFitFixture.Month);
 
     [Fact]
     public void Count_beyond_the_start_rows_adds_blind_workers_over_the_bins_the_box_reaches()
     {
-        var plan = InspiralFitPlan.FromConfig(InspiralFitFixture.Section("count = 3\n" + NarrowBox, ("a", Source)), InspiralFitFixture.Month);
+        var plan = InspiralFitPlan.FromConfig(InspiralFitFixture.Section("count = 3\n" + InspiralFitFixture.SearchBoxKeys, ("a", Source)), InspiralFitFixture.Month);
         var workers = plan.Groups.SelectMany(g => g.Workers).ToList();
         Assert.Equal(["extreme_mass_ratio_inspirals/a", "extreme_mass_ratio_inspirals/search-1", "extreme_mass_ratio_inspirals/search-2"],
             workers.Select(w => w.Id).Order(StringComparer.Ordinal));
@@ -103,7 +89,7 @@ public class InspiralBlindSearchTests
     [Fact]
     public void The_search_is_deterministic_for_the_same_stream_and_stays_in_its_box()
     {
-        var box = new InspiralSearchBox(4e5, 6e5, 8, 12, 0.4, 0.8, 1.15e-3, 1.25e-3, 0.1, 0.2);
+        var box = InspiralFitFixture.SearchBox;
         var generator = InspiralPlanGenerator();
         var window = box.Reach(generator);
         var residual = InspiralFitFixture.Residual(window, Source, 5);
@@ -128,7 +114,7 @@ public class InspiralBlindSearchTests
     [Fact]
     public void Bad_arguments_of_the_search_are_refused()
     {
-        var box = new InspiralSearchBox(4e5, 6e5, 8, 12, 0.4, 0.8, 1.15e-3, 1.25e-3, 0.1, 0.2);
+        var box = InspiralFitFixture.SearchBox;
         var generator = InspiralPlanGenerator();
         var window = new BinWindow(1, 4);
         var random = RandomStream.ForPath(1, 1, 1);

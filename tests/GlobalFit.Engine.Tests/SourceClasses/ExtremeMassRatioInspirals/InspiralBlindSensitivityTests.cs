@@ -13,21 +13,7 @@ namespace GlobalFit.Engine.Tests.SourceClasses.ExtremeMassRatioInspirals;
 /// (matcher overlap ≥ 0.5, as <c>compare</c> counts), and what noise alone gives.</summary>
 public class InspiralBlindSensitivityTests(ITestOutputHelper output)
 {
-    // The box of the demo's blind search, around the fixture's source (M 5e5, μ 10, χ 0.6, ν0 1.2e-3 Hz, e0 0.15).
-    private const string Box = """
-        search_central_mass_min_msun = 4e5
-        search_central_mass_max_msun = 6e5
-        search_compact_mass_min_msun = 8
-        search_compact_mass_max_msun = 12
-        search_spin_min = 0.4
-        search_spin_max = 0.8
-        search_orbital_frequency_min_hz = 1.15e-3
-        search_orbital_frequency_max_hz = 1.25e-3
-        search_eccentricity_min = 0.1
-        search_eccentricity_max = 0.2
-        """;
 
-    private static readonly InspiralSearchBox SearchBox = new(4e5, 6e5, 8, 12, 0.4, 0.8, 1.15e-3, 1.25e-3, 0.1, 0.2);
 
     // SNR 8.65 at 1000 Mpc over the month (measured, InspiralFitFixture), scaled as 1/D; a distance of 1e9 Mpc leaves
     // noise alone (SNR 1e-5).
@@ -37,11 +23,11 @@ public class InspiralBlindSensitivityTests(ITestOutputHelper output)
     private static double Significance(double snr, ulong seed, InspiralBlindSearchSettings settings)
     {
         var generator = InspiralFitPlan.Generator(InspiralFitFixture.Month);
-        var window = SearchBox.Reach(generator);
+        var window = InspiralFitFixture.SearchBox.Reach(generator);
         var residual = InspiralFitFixture.Residual(window, AtSnr(snr), seed);
         var random = RandomStream.ForPath(seed, 3, 3);
         return InspiralBlindSearch.Run(generator, window, residual.Spectra.A, residual.Spectra.E, residual.InverseA, residual.InverseE,
-            SearchBox, settings, 8, ref random).Significance;
+            InspiralFitFixture.SearchBox, settings, 8, ref random).Significance;
     }
 
     [Fact]
@@ -81,7 +67,7 @@ public class InspiralBlindSensitivityTests(ITestOutputHelper output)
             {
                 var truth = AtSnr(snr);
                 var plan = InspiralFitPlan.FromConfig(InspiralFitFixture.Section(
-                    "count = 1\ntemperatures = 2\nsearch_evaluations = 150\nsearch_draws = 300\nsearch_chains = 4\nsearch_chain_steps = 150\n" + Box),
+                    "count = 1\ntemperatures = 2\nsearch_evaluations = 150\nsearch_draws = 300\nsearch_chains = 4\nsearch_chain_steps = 150\n" + InspiralFitFixture.SearchBoxKeys),
                     InspiralFitFixture.Month);
                 var descriptor = plan.Groups[0].Workers[0];
                 var residual = InspiralFitFixture.Residual(descriptor.Bins, truth, (ulong)(500 + 10 * snr + t));

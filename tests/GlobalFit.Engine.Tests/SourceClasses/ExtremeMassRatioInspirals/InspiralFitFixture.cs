@@ -14,6 +14,24 @@ namespace GlobalFit.Engine.Tests.SourceClasses.ExtremeMassRatioInspirals;
 /// worker's window, without simulating a whole record.</summary>
 internal static class InspiralFitFixture
 {
+    /// <summary>A box around the fixture's source (M 5e5, μ 10, χ 0.6, ν0 1.2e-3 Hz, e0 0.15), as a user who knows roughly where
+    /// to look would give it.</summary>
+    public const string SearchBoxKeys = """
+        search_central_mass_min_msun = 4e5
+        search_central_mass_max_msun = 6e5
+        search_compact_mass_min_msun = 8
+        search_compact_mass_max_msun = 12
+        search_spin_min = 0.4
+        search_spin_max = 0.8
+        search_orbital_frequency_min_hz = 1.15e-3
+        search_orbital_frequency_max_hz = 1.25e-3
+        search_eccentricity_min = 0.1
+        search_eccentricity_max = 0.2
+        """;
+
+    /// <summary>The same box as <see cref="SearchBoxKeys"/>.</summary>
+    public static InspiralSearchBox SearchBox { get; } = new(4e5, 6e5, 8, 12, 0.4, 0.8, 1.15e-3, 1.25e-3, 0.1, 0.2);
+
     /// <summary>A month at 10 s: short enough that a template costs a few milliseconds.</summary>
     public static FitDataShape Month { get; } = new("month.h5", 259_200, 10, 0);
 
